@@ -1,0 +1,26 @@
+namespace Winding.Catalogue.Entries;
+
+/// <summary>The JSON form of a core catalogue entry (<c>"kind": "core"</c>), one per file.</summary>
+public sealed class CoreEntryDocument
+{
+    /// <summary>Always <c>core</c>.</summary>
+    public string? Kind { get; set; }
+
+    /// <summary>Stable id: a slug of lower-case letters, digits and hyphens.</summary>
+    public string? Id { get; set; }
+
+    /// <summary>Display name by shape and dimensions, e.g. "Toroid 36 × 23 × 15 mm".</summary>
+    public string? Name { get; set; }
+
+    /// <summary>Core shape; this version knows <c>toroid</c>.</summary>
+    public string? Shape { get; set; }
+
+    /// <summary>Dimensions in millimetres.</summary>
+    public DimensionsMmDocument? DimensionsMm { get; set; }
+
+    /// <summary>Id of the material entry the core is made of.</summary>
+    public string? MaterialId { get; set; }
+
+    /// <summary>Where the values come from (handbook typical values, from memory, common practice, measured).</summary>
+    public string? Source { get; set; }
+}

@@ -1,0 +1,14 @@
+namespace Winding.Core.Plans;
+
+/// <summary>The results of evaluating a plan.</summary>
+/// <param name="Core">Core results.</param>
+/// <param name="Windings">Per-winding results, in winding order.</param>
+/// <param name="TurnsRatio">Last winding's turns over the first's; null with a single winding.</param>
+/// <param name="ImpedanceRatio">The square of the turns ratio; null with a single winding.</param>
+/// <param name="Warnings">Findings, most severe first.</param>
+public sealed record PlanEvaluation(
+    CoreEvaluation Core,
+    IReadOnlyList<WindingEvaluation> Windings,
+    double? TurnsRatio,
+    double? ImpedanceRatio,
+    IReadOnlyList<PlanWarning> Warnings);

@@ -1,0 +1,16 @@
+using Winding.Core.Windings;
+
+namespace Winding.Core.Plans;
+
+/// <summary>A complete plan: the core, the windings in winding order, and optionally the operating conditions.</summary>
+/// <param name="Name">Optional display name.</param>
+/// <param name="Core">The core.</param>
+/// <param name="Windings">The windings in winding order (the first is the primary), at least one.</param>
+/// <param name="Operating">Band, source, load and drive, when known.</param>
+/// <param name="Allowance">Lead allowance used for the length to cut.</param>
+public sealed record TransformerPlan(
+    string? Name,
+    PlanCore Core,
+    IReadOnlyList<WindingSpec> Windings,
+    OperatingConditions? Operating,
+    WireLengthAllowance Allowance);

@@ -1,0 +1,23 @@
+using Winding.Core.Windings;
+using Winding.Core.Wire;
+
+namespace Winding.Core.Plans;
+
+/// <summary>What the engine derived for one winding.</summary>
+/// <param name="Name">Winding name.</param>
+/// <param name="Turns">Number of turns.</param>
+/// <param name="Wire">The wire (with its assumed or stated overall diameter).</param>
+/// <param name="InductanceH">L = AL·N², H.</param>
+/// <param name="Fit">Layer-by-layer fit.</param>
+/// <param name="FillFactor">Copper cross-section of this winding over the core's window area (dimensionless).</param>
+/// <param name="WireLengthM">Length to cut, leads included, m.</param>
+/// <param name="DcResistanceOhm">DC resistance of the whole length to cut at 20 °C, Ω.</param>
+public sealed record WindingEvaluation(
+    string Name,
+    int Turns,
+    RoundWire Wire,
+    double InductanceH,
+    LayerFit Fit,
+    double FillFactor,
+    double WireLengthM,
+    double DcResistanceOhm);

@@ -1,0 +1,54 @@
+using Winding.Core.Plans;
+
+namespace Winding.Web.Api;
+
+/// <summary>Maps the engine's evaluation to the v1 API contract.</summary>
+public static class EvaluationResponseMapper
+{
+    /// <summary>Maps <paramref name="evaluation"/>.</summary>
+    public static EvaluationResponse ToResponse(PlanEvaluation evaluation)
+    {
+        ArgumentNullException.ThrowIfNull(evaluation);
+        var core = evaluation.Core;
+        return new EvaluationResponse(
+            new CoreResponse(
+                core.Effective.EffectiveLengthM,
+                core.Effective.EffectiveAreaM2,
+                core.Effective.EffectiveVolumeM3,
+                core.WindowAreaM2,
+                core.InductanceFactor.HenriesPerTurnSquared),
+            [.. evaluation.Windings.Select(w => new WindingResponse(
+                w.Name,
+                w.Turns,
+                w.InductanceH,
+                w.Fit.Fits,
+                w.Fit.Layers,
+                w.Fit.TurnsPerLayer,
+                w.FillFactor,
+                w.Fit.RemainingHoleDiameter.Metres,
+                w.Fit.MeanTurnLengthM,
+                w.WireLengthM,
+                w.DcResistanceOhm,
+                w.Wire.OverallDiameter.Metres,
+                w.Wire.OverallDiameterAssumed))],
+            evaluation.TurnsRatio,
+            evaluation.ImpedanceRatio,
+            [.. evaluation.Warnings.Select(ToResponse)]);
+    }
+
+    /// <summary>Maps one warning; the severity as a lower-case word.</summary>
+    public static WarningResponse ToResponse(PlanWarning warning)
+    {
+        ArgumentNullException.ThrowIfNull(warning);
+        return new WarningResponse(warning.Code, SeverityWord(warning.Severity), warning.Field, warning.Message);
+    }
+
+    /// <summary>The API word for a severity.</summary>
+    public static string SeverityWord(WarningSeverity severity) => severity switch
+    {
+        WarningSeverity.Info => "info",
+        WarningSeverity.Caution => "caution",
+        WarningSeverity.Error => "error",
+        _ => throw new ArgumentOutOfRangeException(nameof(severity), severity, "Unknown severity."),
+    };
+}

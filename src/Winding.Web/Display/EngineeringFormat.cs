@@ -1,0 +1,47 @@
+using System.Globalization;
+
+namespace Winding.Web.Display;
+
+/// <summary>Formats SI values for display with an SI prefix (µH, mΩ, …), invariant culture.</summary>
+public static class EngineeringFormat
+{
+    private static readonly (double Factor, string Prefix)[] Prefixes =
+    [
+        (1e9, "G"), (1e6, "M"), (1e3, "k"), (1, string.Empty), (1e-3, "m"), (1e-6, "µ"), (1e-9, "n"), (1e-12, "p"),
+    ];
+
+    /// <summary>Formats <paramref name="value"/> in <paramref name="unit"/> with 3 significant figures and an SI prefix.</summary>
+    public static string Format(double value, string unit)
+    {
+        if (!double.IsFinite(value))
+        {
+            return "—";
+        }
+
+        if (value == 0)
+        {
+            return "0 " + unit;
+        }
+
+        var magnitude = Math.Abs(value);
+        foreach (var (factor, prefix) in Prefixes)
+        {
+            if (magnitude >= factor * 0.9995)
+            {
+                return Scaled(value / factor, prefix + unit);
+            }
+        }
+
+        return Scaled(value / 1e-12, "p" + unit);
+    }
+
+    /// <summary>A plain number with a fixed count of decimals and a unit.</summary>
+    public static string Fixed(double value, int decimals, string unit) =>
+        value.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture) + (unit.Length > 0 ? " " + unit : string.Empty);
+
+    private static string Scaled(double scaled, string unit)
+    {
+        var digits = Math.Abs(scaled) >= 100 ? 0 : Math.Abs(scaled) >= 10 ? 1 : 2;
+        return scaled.ToString("F" + digits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture) + " " + unit;
+    }
+}

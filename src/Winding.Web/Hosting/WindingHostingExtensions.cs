@@ -1,0 +1,64 @@
+using MudBlazor.Services;
+using Winding.Web.Api;
+using Winding.Web.Components;
+using Winding.Web.Planning;
+
+namespace Winding.Web.Hosting;
+
+/// <summary>Service registration and the request pipeline, kept out of Program.cs.</summary>
+public static class WindingHostingExtensions
+{
+    /// <summary>The address served when none is configured: loopback only.</summary>
+    public const string DefaultAddress = "http://localhost:5080";
+
+    /// <summary>
+    /// Serves on <see cref="DefaultAddress"/> unless an address is configured (<c>--urls</c>, <c>ASPNETCORE_URLS</c>,
+    /// <c>ASPNETCORE_HTTP_PORTS</c> or the launch profile).
+    /// </summary>
+    public static WebApplicationBuilder UseDefaultAddress(this WebApplicationBuilder builder)
+    {
+        ArgumentNullException.ThrowIfNull(builder);
+        var configured = builder.Configuration["urls"] ?? builder.Configuration["http_ports"] ?? builder.Configuration["https_ports"];
+        if (string.IsNullOrWhiteSpace(configured))
+        {
+            builder.WebHost.UseUrls(DefaultAddress);
+        }
+
+        return builder;
+    }
+
+    /// <summary>Registers Winding's services.</summary>
+    public static IServiceCollection AddWinding(this IServiceCollection services, IConfiguration configuration)
+    {
+        services.AddRazorComponents().AddInteractiveServerComponents();
+        services.AddMudServices();
+        services.AddProblemDetails();
+        services.AddOpenApi();
+        services.AddSingleton(WindingPaths.FromConfiguration(configuration));
+        services.AddSingleton<CatalogueProvider>();
+        services.AddSingleton(TimeProvider.System);
+        services.AddScoped<PlanningState>();
+        return services;
+    }
+
+    /// <summary>Builds the request pipeline: errors, static assets, API, OpenAPI and the Blazor app.</summary>
+    public static WebApplication UseWinding(this WebApplication app)
+    {
+        ArgumentNullException.ThrowIfNull(app);
+        if (!app.Environment.IsDevelopment())
+        {
+            app.UseExceptionHandler("/Error", createScopeForErrors: true);
+        }
+
+        app.UseStatusCodePagesWithReExecute("/not-found", createScopeForStatusCodePages: true);
+        app.UseAntiforgery();
+        app.MapStaticAssets();
+        app.MapOpenApi();
+        app.MapWindingApi();
+        app.MapRazorComponents<App>().AddInteractiveServerRenderMode();
+
+        // Load the catalogue at start-up so that file problems are logged at once.
+        _ = app.Services.GetRequiredService<CatalogueProvider>();
+        return app;
+    }
+}

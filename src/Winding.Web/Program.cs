@@ -1,0 +1,10 @@
+using Winding.Web.Hosting;
+
+var builder = WebApplication.CreateBuilder(args);
+builder.WebHost.UseStaticWebAssets();
+builder.UseDefaultAddress();
+builder.Services.AddWinding(builder.Configuration);
+
+var app = builder.Build();
+app.UseWinding();
+app.Run();
