@@ -25,10 +25,13 @@ public static class JsonErrorText
     {
         ArgumentNullException.ThrowIfNull(exception);
         var message = exception.Message;
-        var cut = message.IndexOf(" Path: ", StringComparison.Ordinal);
-        if (cut > 0)
+        foreach (var marker in new[] { " Path: ", " LineNumber: " })
         {
-            message = message[..cut];
+            var cut = message.IndexOf(marker, StringComparison.Ordinal);
+            if (cut > 0)
+            {
+                message = message[..cut];
+            }
         }
 
         message = message.Trim();

@@ -1,0 +1,109 @@
+using CsCheck;
+using Winding.Core.Geometry;
+using Winding.Core.Materials;
+using Winding.Core.Plans;
+using Winding.Core.Quantities;
+using Winding.Core.Windings;
+using Winding.Core.Wire;
+
+namespace Winding.Core.Tests.Plans;
+
+/// <summary>Property tests (CsCheck) over random valid geometry, wire and turns.</summary>
+public sealed class PlanPropertyTests
+{
+    private static readonly Gen<ToroidCore> Toroids =
+        Gen.Select(Gen.Double[2, 100], Gen.Double[0.05, 0.95], Gen.Double[0.5, 50])
+            .Select((od, ratio, h) => ToroidCore.Create(Length.FromMillimetres(od), Length.FromMillimetres(od * ratio), Length.FromMillimetres(h)));
+
+    private static readonly Gen<double> WireMm = Gen.Double[0.02, 3];
+
+    [Fact]
+    public void Inductance_GrowsAsTurnsSquared()
+    {
+        // L = AL·N² (IEC 60050-221 definition of AL): doubling N quadruples L; one more turn never lowers L.
+        Gen.Select(Toroids, Gen.Double[1, 20_000], Gen.Int[1, 50_000]).Sample((core, mu, n) =>
+        {
+            var al = InductanceFactor.FromPermeability(mu, core.EffectiveParameters());
+            var l = al.InductanceH(n);
+            Assert.Equal(4 * l, al.InductanceH(2 * n), 4 * l * 1e-12);
+            Assert.True(al.InductanceH(n + 1) > l);
+        });
+    }
+
+    [Fact]
+    public void Stacking_MultipliesAlByTheCount()
+    {
+        // IEC 60205: n identical rings side by side have C1/n, so AL × n.
+        Gen.Select(Toroids, Gen.Int[1, 20]).Sample((core, n) =>
+        {
+            var one = InductanceFactor.FromPermeability(125, core.EffectiveParameters()).HenriesPerTurnSquared;
+            var stack = InductanceFactor.FromPermeability(125, core.Stacked(n).EffectiveParameters()).HenriesPerTurnSquared;
+            Assert.Equal(n * one, stack, n * one * 1e-9);
+        });
+    }
+
+    [Fact]
+    public void EffectiveParameters_AreConsistent()
+    {
+        // IEC 60205: Ve = le·Ae; the effective path lies within the ring (π·ID ≤ le ≤ π·OD) and Ae does not exceed the
+        // geometric section h·(OD − ID)/2 (physics-sources.md §1.2: the mean-path AL is always low).
+        Toroids.Sample(core =>
+        {
+            var p = core.EffectiveParameters();
+            Assert.Equal(p.EffectiveLengthM * p.EffectiveAreaM2, p.EffectiveVolumeM3, p.EffectiveVolumeM3 * 1e-12);
+            Assert.InRange(p.EffectiveLengthM, Math.PI * core.InnerDiameter.Metres, Math.PI * core.OuterDiameter.Metres);
+            Assert.True(p.EffectiveAreaM2 <= core.Height.Metres * (core.OuterDiameter.Metres - core.InnerDiameter.Metres) / 2 * (1 + 1e-12));
+        });
+    }
+
+    [Fact]
+    public void ThickerWire_NeverFitsMoreTurns()
+    {
+        Gen.Select(Toroids, WireMm, WireMm).Sample((core, a, b) =>
+        {
+            var thin = Math.Min(a, b);
+            var thick = Math.Max(a, b);
+            var many = 1_000_000;
+            var thinFit = ToroidLayerFit.Fit(core, core.InnerDiameter, RoundWire.Create(Length.FromMillimetres(thin), Length.FromMillimetres(thin)), many);
+            var thickFit = ToroidLayerFit.Fit(core, core.InnerDiameter, RoundWire.Create(Length.FromMillimetres(thick), Length.FromMillimetres(thick)), many);
+            var thinFirst = thinFit.TurnsPerLayer.Count > 0 ? thinFit.TurnsPerLayer[0] : 0;
+            var thickFirst = thickFit.TurnsPerLayer.Count > 0 ? thickFit.TurnsPerLayer[0] : 0;
+            Assert.True(thickFirst <= thinFirst, $"first layer: {thickFirst} of {thick} mm > {thinFirst} of {thin} mm");
+            Assert.True(many - thickFit.UnplacedTurns <= many - thinFit.UnplacedTurns);
+        });
+    }
+
+    [Fact]
+    public void Evaluate_ValidPlans_GiveFiniteResultsAndFillBelowOne()
+    {
+        // Each layer's turns occupy at most π/4 of their annulus (derived from the layer convention), so a winding
+        // that fits has an overall-area fill of at most π/4 < 1.
+        Gen.Select(Toroids, Gen.Int[1, 3], Gen.Int[1, 5_000], WireMm, Gen.Double[1, 20_000]).Sample((core, stack, turns, wireMm, mu) =>
+        {
+            var wire = RoundWire.Enamelled(Length.FromMillimetres(wireMm));
+            var plan = new TransformerPlan(
+                "property",
+                new PlanCore(core, stack, MagneticMaterial.Create("test", mu)),
+                [WindingSpec.Create("a", turns, wire), WindingSpec.Create("b", turns, wire)],
+                null,
+                WireLengthAllowance.Default);
+
+            var result = PlanEvaluator.Evaluate(plan);
+
+            Assert.True(double.IsFinite(result.Core.InductanceFactor.HenriesPerTurnSquared));
+            foreach (var w in result.Windings)
+            {
+                Assert.True(double.IsFinite(w.InductanceH) && double.IsFinite(w.WireLengthM) && double.IsFinite(w.DcResistanceOhm));
+                Assert.True(double.IsFinite(w.Fit.MeanTurnLengthM) && w.Fit.MeanTurnLengthM > 0);
+                Assert.True(w.Fit.RemainingHoleDiameter.Metres >= 0);
+                if (w.Fit.Fits)
+                {
+                    var overallFill = w.Turns * wire.OverallAreaM2 / result.Core.WindowAreaM2;
+                    Assert.True(overallFill <= Math.PI / 4 + 1e-12, $"fill {overallFill}");
+                }
+            }
+
+            Assert.Equal(result.Windings.Any(w => !w.Fit.Fits), result.Warnings.Any(x => x.Code == WarningCodes.WireDoesNotFit));
+        });
+    }
+}

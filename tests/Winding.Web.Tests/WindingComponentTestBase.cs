@@ -1,0 +1,30 @@
+using Microsoft.AspNetCore.Components;
+using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.Logging.Abstractions;
+using MudBlazor.Services;
+using Winding.Web.Hosting;
+using Winding.Web.Planning;
+
+namespace Winding.Web.Tests;
+
+/// <summary>
+/// Shared bunit set-up: MudBlazor services, loose JS interop, an interactive server renderer, and the app's services
+/// over the built-in catalogue. Disposed asynchronously (one MudBlazor service is async-dispose only).
+/// </summary>
+public abstract class WindingComponentTestBase : BunitContext, IAsyncLifetime
+{
+    protected WindingComponentTestBase()
+    {
+        Services.AddMudServices();
+        var paths = new WindingPaths(Path.Combine(AppContext.BaseDirectory, "cores"), Path.Combine(Path.GetTempPath(), "winding-tests"));
+        Services.AddSingleton(paths);
+        Services.AddSingleton(new CatalogueProvider(paths, NullLogger<CatalogueProvider>.Instance));
+        Services.AddScoped<PlanningState>();
+        JSInterop.Mode = JSRuntimeMode.Loose;
+        SetRendererInfo(new RendererInfo("Server", isInteractive: true));
+    }
+
+    public Task InitializeAsync() => Task.CompletedTask;
+
+    Task IAsyncLifetime.DisposeAsync() => base.DisposeAsync().AsTask();
+}
