@@ -1,0 +1,49 @@
+using BenchmarkDotNet.Attributes;
+using Winding.Catalogue.Loading;
+using Winding.Catalogue.Plans;
+using Winding.Core.Geometry;
+using Winding.Core.Materials;
+using Winding.Core.Plans;
+using Winding.Core.Quantities;
+using Winding.Core.Windings;
+using Winding.Core.Wire;
+
+namespace Winding.Benchmarks;
+
+/// <summary>How long one plan takes: the engine alone, and validation of the request document plus the engine.</summary>
+[MemoryDiagnoser]
+public class EvaluateBenchmarks
+{
+    private TransformerPlan _plan = default!;
+    private PlanDocument _document = default!;
+
+    [GlobalSetup]
+    public void Setup()
+    {
+        var core = ToroidCore.Create(Length.FromMillimetres(36), Length.FromMillimetres(23), Length.FromMillimetres(15));
+        _plan = new TransformerPlan(
+            "benchmark",
+            new PlanCore(core, 1, MagneticMaterial.Create("NiZn, μi 125", 125)),
+            [
+                WindingSpec.Create("primary", 4, RoundWire.Create(Length.FromMillimetres(0.8), Length.FromMillimetres(0.86))),
+                WindingSpec.Create("secondary", 100, RoundWire.Enamelled(Length.FromMillimetres(0.25))),
+            ],
+            new OperatingConditions(1.8e6, 30e6, 50, 450, 10),
+            WireLengthAllowance.Default);
+        _document = new PlanDocument
+        {
+            Core = new PlanCoreDocument { Shape = "toroid", DimensionsMm = new() { OuterDiameter = 36, InnerDiameter = 23, Height = 15 }, InitialPermeability = 125 },
+            Windings =
+            [
+                new PlanWindingDocument { Name = "primary", Turns = 4, Wire = new PlanWireDocument { ConductorDiameterMm = 0.8, OverallDiameterMm = 0.86 } },
+                new PlanWindingDocument { Name = "secondary", Turns = 100, Wire = new PlanWireDocument { ConductorDiameterMm = 0.25 } },
+            ],
+        };
+    }
+
+    [Benchmark]
+    public PlanEvaluation EvaluatePlan() => PlanEvaluator.Evaluate(_plan);
+
+    [Benchmark]
+    public PlanEvaluation ValidateAndEvaluate() => PlanEvaluator.Evaluate(PlanReader.Read(_document, CoreCatalogue.Empty).Plan!);
+}

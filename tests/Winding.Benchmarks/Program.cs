@@ -1,0 +1,3 @@
+using BenchmarkDotNet.Running;
+
+BenchmarkSwitcher.FromAssembly(typeof(Winding.Benchmarks.EvaluateBenchmarks).Assembly).Run(args);

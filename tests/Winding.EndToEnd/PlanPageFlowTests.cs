@@ -1,0 +1,63 @@
+using System.Net.Http.Json;
+using System.Text.Json;
+using Microsoft.Playwright;
+using Winding.Web.Display;
+
+namespace Winding.EndToEnd;
+
+/// <summary>The planning page in a real browser against the real server.</summary>
+public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
+{
+    private readonly ServerFixture _server;
+
+    public PlanPageFlowTests(ServerFixture server) => _server = server;
+
+    [SkippableFact]
+    public async Task PickCore_TypeTurns_InductanceFollowsTheApi()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        var page = await session.OpenInteractiveAsync(_server.BaseAddress);
+
+        await page.GetByRole(AriaRole.Combobox).First.ClickAsync();
+        await page.GetByRole(AriaRole.Option, new PageGetByRoleOptions { Name = "Toroid 36 × 23 × 15 mm · NiZn, μi 125" }).ClickAsync();
+        var inductance = page.Locator("[data-testid=value-inductance]");
+        await page.Locator("#turns").FillAsync("8");
+        await Assertions.Expect(inductance).ToHaveTextAsync(await ExpectedInductance(8));
+
+        await page.Locator("#turns").FillAsync("24");
+
+        await Assertions.Expect(inductance).ToHaveTextAsync(await ExpectedInductance(24));
+        await Assertions.Expect(page.Locator("[data-testid=value-layers]")).ToHaveTextAsync("1");
+        await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "plan-page.png"), FullPage = true });
+    }
+
+    [SkippableFact]
+    public async Task NonsenseTurns_ShowAFieldError_AndTheAppKeepsWorking()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        var page = await session.OpenInteractiveAsync(_server.BaseAddress);
+
+        await page.Locator("#turns").FillAsync("twelve");
+
+        await Assertions.Expect(page.GetByText("'twelve' is not a whole number")).ToBeVisibleAsync();
+        await page.Locator("#turns").FillAsync("12");
+        await Assertions.Expect(page.Locator("[data-testid=value-inductance]")).ToBeVisibleAsync();
+        await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "plan-page-recovered.png") });
+    }
+
+    /// <summary>What the API answers for the same plan, formatted as the page formats it.</summary>
+    private async Task<string> ExpectedInductance(int turns)
+    {
+        using var client = _server.CreateClient();
+        using var response = await client.PostAsJsonAsync(
+            new Uri("/api/v1/evaluate", UriKind.Relative),
+            new
+            {
+                core = new { catalogueId = "toroid-36x23x15-nizn-125" },
+                windings = new[] { new { name = "winding", turns, wire = new { conductorDiameterMm = 0.5 } } },
+            });
+        response.EnsureSuccessStatusCode();
+        using var json = JsonDocument.Parse(await response.Content.ReadAsStringAsync());
+        return EngineeringFormat.Format(json.RootElement.GetProperty("windings")[0].GetProperty("inductanceH").GetDouble(), "H");
+    }
+}

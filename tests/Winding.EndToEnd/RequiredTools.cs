@@ -1,0 +1,33 @@
+namespace Winding.EndToEnd;
+
+/// <summary>
+/// External tools the browser tests need. Without a tool the test is reported as skipped with a message that says what
+/// to install; with <c>WINDING_REQUIRE_TOOLS=1</c> (as CI sets it) a missing tool fails the test instead.
+/// </summary>
+public static class RequiredTools
+{
+    /// <summary>Environment variable that turns a missing tool into a failure.</summary>
+    public const string RequireVariable = "WINDING_REQUIRE_TOOLS";
+
+    /// <summary>Debian's Chromium, driven by Playwright through its executable-path option.</summary>
+    public static string Chromium() => Require(
+        Environment.GetEnvironmentVariable("WINDING_CHROMIUM") is { Length: > 0 } custom ? custom : "/usr/bin/chromium",
+        "Chromium",
+        "apt-get install chromium");
+
+    private static string Require(string path, string name, string install)
+    {
+        if (File.Exists(path))
+        {
+            return path;
+        }
+
+        var message = $"{name} was not found at {path}: install it (on Debian/Ubuntu: {install}) to run this test.";
+        if (Environment.GetEnvironmentVariable(RequireVariable) == "1")
+        {
+            Assert.Fail(message + $" ({RequireVariable}=1 makes a missing tool a failure.)");
+        }
+
+        throw new SkipException(message);
+    }
+}
