@@ -25,8 +25,8 @@ public class EvaluateBenchmarks
             "benchmark",
             new PlanCore(core, 1, MagneticMaterial.Create("NiZn, μi 125", 125)),
             [
-                WindingSpec.Create("primary", 4, RoundWire.Create(Length.FromMillimetres(0.8), Length.FromMillimetres(0.86))),
-                WindingSpec.Create("secondary", 100, RoundWire.Enamelled(Length.FromMillimetres(0.25))),
+                WindingSpec.Create("primary", 4, WindingWire.Solid(Length.FromMillimetres(0.8), Length.FromMillimetres(0.86))),
+                WindingSpec.Create("secondary", 100, WindingWire.Enamelled(Length.FromMillimetres(0.25))),
             ],
             new OperatingConditions(1.8e6, 30e6, 50, 450, 10),
             WireLengthAllowance.Default);

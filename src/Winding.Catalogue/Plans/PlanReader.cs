@@ -165,7 +165,7 @@ public static class PlanReader
         return windings.Count == documents.Count ? windings : null;
     }
 
-    private static RoundWire? ReadWire(FieldValidator v, string prefix, PlanWireDocument? document)
+    private static WindingWire? ReadWire(FieldValidator v, string prefix, PlanWireDocument? document)
     {
         if (document is null)
         {
@@ -181,7 +181,7 @@ public static class PlanReader
 
         if (document.OverallDiameterMm is null)
         {
-            return RoundWire.Enamelled(Length.FromMillimetres(conductor.Value));
+            return WindingWire.Enamelled(Length.FromMillimetres(conductor.Value));
         }
 
         var overall = v.Range($"{prefix}.overallDiameterMm", document.OverallDiameterMm, MinimumWireMm, MaximumWireMm * 1.5, "mm");
@@ -196,7 +196,7 @@ public static class PlanReader
             return null;
         }
 
-        return RoundWire.Create(Length.FromMillimetres(conductor.Value), Length.FromMillimetres(overall.Value));
+        return WindingWire.Solid(Length.FromMillimetres(conductor.Value), Length.FromMillimetres(overall.Value));
     }
 
     private static OperatingConditions? ReadOperating(FieldValidator v, PlanOperatingDocument? document)

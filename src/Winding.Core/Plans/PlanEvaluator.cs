@@ -38,7 +38,7 @@ public static class PlanEvaluator
                     WarningCodes.OverallDiameterAssumed,
                     WarningSeverity.Info,
                     $"windings[{i}].wire.overallDiameterMm",
-                    Invariant($"Winding '{spec.Name}': no overall diameter given, so the IEC 60317-0-1 grade 1 enamel build was assumed ({spec.Wire.OverallDiameter.Millimetres:0.###} mm over a {spec.Wire.ConductorDiameter.Millimetres:0.###} mm conductor).")));
+                    Invariant($"Winding '{spec.Name}': no overall diameter given, so the IEC 60317-0-1 grade 1 enamel build was assumed ({spec.Wire.ElementOverallDiameter.Millimetres:0.###} mm over a {spec.Wire.StrandDiameter.Millimetres:0.###} mm conductor).")));
             }
 
             if (!fit.Fits)
@@ -47,7 +47,7 @@ public static class PlanEvaluator
                     WarningCodes.WireDoesNotFit,
                     WarningSeverity.Error,
                     $"windings[{i}].turns",
-                    Invariant($"Winding '{spec.Name}' does not fit: only {spec.Turns - fit.UnplacedTurns} of {spec.Turns} turns of {spec.Wire.OverallDiameter.Millimetres:0.###} mm wire find room in the {(i == 0 ? "core's hole" : "hole the earlier windings leave")} ({fit.Layers} layer{(fit.Layers == 1 ? "" : "s")}). Use fewer turns, thinner wire or a core with a larger hole.")));
+                    Invariant($"Winding '{spec.Name}' does not fit: only {spec.Turns - fit.UnplacedTurns} of {spec.Turns} turns of {spec.Wire.ElementOverallDiameter.Millimetres:0.###} mm wire find room in the {(i == 0 ? "core's hole" : "hole the earlier windings leave")} ({fit.Layers} layer{(fit.Layers == 1 ? "" : "s")}). Use fewer turns, thinner wire or a core with a larger hole.")));
             }
         }
 

@@ -15,7 +15,7 @@ namespace Winding.Core.Plans;
 public sealed record WindingEvaluation(
     string Name,
     int Turns,
-    RoundWire Wire,
+    WindingWire Wire,
     double InductanceH,
     LayerFit Fit,
     double FillFactor,

@@ -5,7 +5,7 @@ namespace Winding.Core.Plans;
 /// <summary>One winding of a plan, in winding order: name, number of turns and wire.</summary>
 public sealed record WindingSpec
 {
-    private WindingSpec(string name, int turns, RoundWire wire)
+    private WindingSpec(string name, int turns, WindingWire wire)
     {
         Name = name;
         Turns = turns;
@@ -19,11 +19,11 @@ public sealed record WindingSpec
     public int Turns { get; }
 
     /// <summary>The wire.</summary>
-    public RoundWire Wire { get; }
+    public WindingWire Wire { get; }
 
     /// <summary>Creates a winding.</summary>
     /// <exception cref="ArgumentOutOfRangeException">Fewer than one turn.</exception>
-    public static WindingSpec Create(string name, int turns, RoundWire wire)
+    public static WindingSpec Create(string name, int turns, WindingWire wire)
     {
         ArgumentNullException.ThrowIfNull(name);
         ArgumentNullException.ThrowIfNull(wire);

@@ -10,7 +10,7 @@ namespace Winding.Core.Windings;
 /// <list type="bullet">
 /// <item>layer j of a winding that starts at hole diameter D0 holds ⌊π·(D0 − (2j − 1)·d)/d⌋ turns of overall wire
 /// diameter d (the arc length of the circle through the wire centres divided by d); for the first winding D0 = ID, which
-/// is the convention ⌊π·(ID − (2k − 1)·d)/d⌋;</item>
+/// is the convention ⌊π·(ID − (2k − 1)·d)/d⌋; with n elements in hand a turn takes n of those places;</item>
 /// <item>the hole left is D0 − 2·layers·d;</item>
 /// <item>the mean turn length of a layer whose wire centres lie t above the core surface is the perimeter of the core's
 /// cross-section grown by t: (OD − ID) + 2·h + 2π·t, with t = (ID − D0)/2 + (j − ½)·d; for the first winding this is
@@ -28,7 +28,7 @@ public static class ToroidLayerFit
     /// <param name="startHoleDiameter">The hole diameter D0 left by the windings already on the core (ID for the first).</param>
     /// <param name="wire">The wire; its overall diameter sets the fit.</param>
     /// <param name="turns">Number of turns, at least 1.</param>
-    public static LayerFit Fit(ToroidCore core, Length startHoleDiameter, RoundWire wire, int turns)
+    public static LayerFit Fit(ToroidCore core, Length startHoleDiameter, WindingWire wire, int turns)
     {
         ArgumentNullException.ThrowIfNull(core);
         ArgumentNullException.ThrowIfNull(wire);
@@ -38,7 +38,8 @@ public static class ToroidLayerFit
             throw new ArgumentOutOfRangeException(nameof(startHoleDiameter), startHoleDiameter, "The start hole must lie between zero and the inner diameter.");
         }
 
-        var dM = wire.OverallDiameter.Metres;
+        var dM = wire.ElementOverallDiameter.Metres;
+        var inHand = wire.ElementsInHand;
         var d0M = startHoleDiameter.Metres;
         var buildBelowM = (core.InnerDiameter.Metres - d0M) / 2;
         var sectionPerimeterM = core.OuterDiameter.Metres - core.InnerDiameter.Metres + 2 * core.Height.Metres;
@@ -50,7 +51,8 @@ public static class ToroidLayerFit
         for (var j = 1; remaining > 0 && j <= MaximumLayers; j++)
         {
             var centreCircleM = d0M - (2 * j - 1) * dM;
-            var capacity = centreCircleM > 0 ? (int)Math.Min(int.MaxValue, Math.Floor(Math.PI * centreCircleM / dM)) : 0;
+            var positions = centreCircleM > 0 ? Math.Floor(Math.PI * centreCircleM / dM) : 0;
+            var capacity = (int)Math.Min(int.MaxValue, Math.Floor(positions / inHand));
             if (capacity < 1)
             {
                 break;

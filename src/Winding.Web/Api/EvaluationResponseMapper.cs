@@ -29,7 +29,7 @@ public static class EvaluationResponseMapper
                 w.Fit.MeanTurnLengthM,
                 w.WireLengthM,
                 w.DcResistanceOhm,
-                w.Wire.OverallDiameter.Metres,
+                w.Wire.ElementOverallDiameter.Metres,
                 w.Wire.OverallDiameterAssumed))],
             evaluation.TurnsRatio,
             evaluation.ImpedanceRatio,

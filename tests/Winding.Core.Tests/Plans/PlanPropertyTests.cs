@@ -64,8 +64,8 @@ public sealed class PlanPropertyTests
             var thin = Math.Min(a, b);
             var thick = Math.Max(a, b);
             var many = 1_000_000;
-            var thinFit = ToroidLayerFit.Fit(core, core.InnerDiameter, RoundWire.Create(Length.FromMillimetres(thin), Length.FromMillimetres(thin)), many);
-            var thickFit = ToroidLayerFit.Fit(core, core.InnerDiameter, RoundWire.Create(Length.FromMillimetres(thick), Length.FromMillimetres(thick)), many);
+            var thinFit = ToroidLayerFit.Fit(core, core.InnerDiameter, WindingWire.Solid(Length.FromMillimetres(thin), Length.FromMillimetres(thin)), many);
+            var thickFit = ToroidLayerFit.Fit(core, core.InnerDiameter, WindingWire.Solid(Length.FromMillimetres(thick), Length.FromMillimetres(thick)), many);
             var thinFirst = thinFit.TurnsPerLayer.Count > 0 ? thinFit.TurnsPerLayer[0] : 0;
             var thickFirst = thickFit.TurnsPerLayer.Count > 0 ? thickFit.TurnsPerLayer[0] : 0;
             Assert.True(thickFirst <= thinFirst, $"first layer: {thickFirst} of {thick} mm > {thinFirst} of {thin} mm");
@@ -80,7 +80,7 @@ public sealed class PlanPropertyTests
         // that fits has an overall-area fill of at most π/4 < 1.
         Gen.Select(Toroids, Gen.Int[1, 3], Gen.Int[1, 5_000], WireMm, Gen.Double[1, 20_000]).Sample((core, stack, turns, wireMm, mu) =>
         {
-            var wire = RoundWire.Enamelled(Length.FromMillimetres(wireMm));
+            var wire = WindingWire.Enamelled(Length.FromMillimetres(wireMm));
             var plan = new TransformerPlan(
                 "property",
                 new PlanCore(core, stack, MagneticMaterial.Create("test", mu)),

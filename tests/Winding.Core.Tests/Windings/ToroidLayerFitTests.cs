@@ -22,7 +22,7 @@ public sealed class ToroidLayerFitTests
     public void Fit_FullLayers_MatchCheckValues(double idMm, double wireMm, int[] expected)
     {
         var core = Core(idMm * 2, idMm, 5);
-        var wire = RoundWire.Create(Length.FromMillimetres(wireMm * 0.9), Length.FromMillimetres(wireMm));
+        var wire = WindingWire.Solid(Length.FromMillimetres(wireMm * 0.9), Length.FromMillimetres(wireMm));
 
         var fit = ToroidLayerFit.Fit(core, core.InnerDiameter, wire, expected.Sum());
 
@@ -36,7 +36,7 @@ public sealed class ToroidLayerFitTests
     {
         // ID 5 mm with 0.566 mm wire: 24 + 18 + 12 + 5 = 59 turns, and a fifth layer has no room (5 − 9·0.566 < 0).
         var core = Core(10, 5, 4);
-        var wire = RoundWire.Create(Length.FromMillimetres(0.5), Length.FromMillimetres(0.566));
+        var wire = WindingWire.Solid(Length.FromMillimetres(0.5), Length.FromMillimetres(0.566));
 
         var fit = ToroidLayerFit.Fit(core, core.InnerDiameter, wire, 60);
 
@@ -49,7 +49,7 @@ public sealed class ToroidLayerFitTests
     public void Fit_WireThickerThanTheHole_PlacesNothing()
     {
         var core = Core(10, 2, 4);
-        var wire = RoundWire.Create(Length.FromMillimetres(2.5), Length.FromMillimetres(2.6));
+        var wire = WindingWire.Solid(Length.FromMillimetres(2.5), Length.FromMillimetres(2.6));
 
         var fit = ToroidLayerFit.Fit(core, core.InnerDiameter, wire, 1);
 
@@ -63,7 +63,7 @@ public sealed class ToroidLayerFitTests
     {
         // physics-sources.md §11: MLT of the first layer = (OD − ID) + 2H + π·d_o = 13.71 mm for d_o = 0.226 mm.
         var core = Core(10, 5, 4);
-        var wire = RoundWire.Create(Length.FromMillimetres(0.2), Length.FromMillimetres(0.226));
+        var wire = WindingWire.Solid(Length.FromMillimetres(0.2), Length.FromMillimetres(0.226));
 
         var fit = ToroidLayerFit.Fit(core, core.InnerDiameter, wire, 20);
 
@@ -75,7 +75,7 @@ public sealed class ToroidLayerFitTests
     {
         // The second winding's first layer lies on a circle 2·d₁ smaller, with the same convention (common practice).
         var core = Core(20, 10, 5);
-        var wire = RoundWire.Create(Length.FromMillimetres(0.5), Length.FromMillimetres(0.544));
+        var wire = WindingWire.Solid(Length.FromMillimetres(0.5), Length.FromMillimetres(0.544));
         var first = ToroidLayerFit.Fit(core, core.InnerDiameter, wire, 10);
 
         var second = ToroidLayerFit.Fit(core, first.RemainingHoleDiameter, wire, 100);

@@ -26,9 +26,9 @@ public sealed class EnamelBuildTests
     [Fact]
     public void Enamelled_ReportsTheBuildAsAssumed()
     {
-        var wire = RoundWire.Enamelled(Length.FromMillimetres(0.5));
+        var wire = WindingWire.Enamelled(Length.FromMillimetres(0.5));
 
         Assert.True(wire.OverallDiameterAssumed);
-        Assert.Equal(0.544, wire.OverallDiameter.Millimetres, 9);
+        Assert.Equal(0.544, wire.ElementOverallDiameter.Millimetres, 9);
     }
 }

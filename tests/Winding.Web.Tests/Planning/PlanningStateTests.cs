@@ -14,7 +14,7 @@ public sealed class PlanningStateTests : WindingComponentTestBase
 
         Assert.Null(State.ErrorFor(PlanField.ConductorDiameter));
         Assert.NotNull(State.Result);
-        Assert.Equal(0.4, State.Result!.Windings[0].Wire.ConductorDiameter.Millimetres, 9);
+        Assert.Equal(0.4, State.Result!.Windings[0].Wire.StrandDiameter.Millimetres, 9);
     }
 
     [Theory]
