@@ -5,7 +5,7 @@ namespace Winding.Catalogue.Entries;
 /// <summary>A validated core entry of the catalogue.</summary>
 /// <param name="Id">Stable slug id.</param>
 /// <param name="Name">Display name.</param>
-/// <param name="Toroid">Geometry of one core.</param>
+/// <param name="Shape">Geometry of one core.</param>
 /// <param name="Material">The material entry it is made of.</param>
 /// <param name="Source">Provenance of the values.</param>
-public sealed record CatalogueCore(string Id, string Name, ToroidCore Toroid, CatalogueMaterial Material, string Source);
+public sealed record CatalogueCore(string Id, string Name, CoreShape Shape, CatalogueMaterial Material, string Source);

@@ -12,11 +12,20 @@ public sealed class CoreEntryDocument
     /// <summary>Display name by shape and dimensions, e.g. "Toroid 36 × 23 × 15 mm".</summary>
     public string? Name { get; set; }
 
-    /// <summary>Core shape; this version knows <c>toroid</c>.</summary>
+    /// <summary>Core shape: <c>toroid</c>, <c>sleeve</c>, <c>two-hole</c> or <c>bobbin</c>.</summary>
     public string? Shape { get; set; }
 
-    /// <summary>Dimensions in millimetres.</summary>
+    /// <summary>Bobbin family (<c>E</c>, <c>pot</c>, <c>RM</c>, <c>other</c>); bobbin cores only.</summary>
+    public string? Family { get; set; }
+
+    /// <summary>Dimensions in millimetres (which ones depends on the shape).</summary>
     public DimensionsMmDocument? DimensionsMm { get; set; }
+
+    /// <summary>Entered effective parameters (required for bobbins, optional for two-hole cores).</summary>
+    public EffectiveParametersDocument? Effective { get; set; }
+
+    /// <summary>AL from a datasheet in nH per turn² (bobbin cores, e.g. gapped).</summary>
+    public double? AlNh { get; set; }
 
     /// <summary>Id of the material entry the core is made of.</summary>
     public string? MaterialId { get; set; }

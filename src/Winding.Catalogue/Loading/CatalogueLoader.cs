@@ -135,12 +135,7 @@ public static class CatalogueLoader
     {
         var validator = new FieldValidator();
         CheckCommon(validator, document.Id, document.Name);
-        if (document.Shape != CoreShapes.Toroid)
-        {
-            validator.Add("shape", $"Unknown shape '{document.Shape}': this version knows \"{CoreShapes.Toroid}\".");
-        }
-
-        var toroid = ToroidDimensionsRules.Validate(validator, "dimensionsMm", document.DimensionsMm);
+        var shape = CoreShapeRules.Validate(validator, string.Empty, document.Shape, document.Family, document.DimensionsMm, document.Effective, document.AlNh);
         CatalogueMaterial? material = null;
         if (string.IsNullOrEmpty(document.MaterialId))
         {
@@ -151,13 +146,13 @@ public static class CatalogueLoader
             validator.Add("materialId", $"No material with the id '{document.MaterialId}' is in the catalogue.");
         }
 
-        if (!validator.IsValid || toroid is null || material is null)
+        if (!validator.IsValid || shape is null || material is null)
         {
             Report(file, validator, problems);
             return null;
         }
 
-        return new CatalogueCore(document.Id!, document.Name!, toroid, material, document.Source ?? string.Empty);
+        return new CatalogueCore(document.Id!, document.Name!, shape, material, document.Source ?? string.Empty);
     }
 
     private static void CheckCommon(FieldValidator validator, string? id, string? name)

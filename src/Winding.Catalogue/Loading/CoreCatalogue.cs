@@ -8,7 +8,7 @@ public sealed class CoreCatalogue
     /// <summary>Creates a catalogue from validated entries.</summary>
     public CoreCatalogue(IEnumerable<CatalogueCore> cores, IEnumerable<CatalogueMaterial> materials, IEnumerable<CatalogueProblem> problems)
     {
-        Cores = [.. cores.OrderBy(c => c.Toroid.OuterDiameter).ThenBy(c => c.Name, StringComparer.Ordinal)];
+        Cores = [.. cores.OrderBy(c => c.Shape.ShapeName, StringComparer.Ordinal).ThenBy(c => c.Shape.WindowAreaM2).ThenBy(c => c.Name, StringComparer.Ordinal).ThenBy(c => c.Id, StringComparer.Ordinal)];
         Materials = [.. materials.OrderBy(m => m.Material.InitialPermeability).ThenBy(m => m.Name, StringComparer.Ordinal)];
         Problems = [.. problems];
         CoresById = Cores.ToDictionary(c => c.Id, StringComparer.Ordinal);
@@ -18,7 +18,7 @@ public sealed class CoreCatalogue
     /// <summary>An empty catalogue.</summary>
     public static CoreCatalogue Empty { get; } = new([], [], []);
 
-    /// <summary>Cores, smallest first.</summary>
+    /// <summary>Cores by shape, then smallest window first.</summary>
     public IReadOnlyList<CatalogueCore> Cores { get; }
 
     /// <summary>Materials, lowest permeability first.</summary>

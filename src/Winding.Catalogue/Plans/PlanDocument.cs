@@ -1,3 +1,5 @@
+using Winding.Catalogue.Entries;
+
 namespace Winding.Catalogue.Plans;
 
 /// <summary>
@@ -16,8 +18,11 @@ public sealed class PlanDocument
     /// <summary>The windings in winding order; the first is the primary.</summary>
     public List<PlanWindingDocument?>? Windings { get; set; }
 
-    /// <summary>Band, source, load and drive (optional).</summary>
+    /// <summary>Band, source, load, drive and waveform (optional).</summary>
     public PlanOperatingDocument? Operating { get; set; }
+
+    /// <summary>Lead length and margin for the length to cut (optional; defaults 50 mm per lead, 5 %).</summary>
+    public PlanAllowanceDocument? Allowance { get; set; }
 }
 
 /// <summary>The core of a plan document.</summary>
@@ -26,11 +31,20 @@ public sealed class PlanCoreDocument
     /// <summary>Id of a catalogue core; or leave empty and give the inline fields.</summary>
     public string? CatalogueId { get; set; }
 
-    /// <summary>Inline core: the shape (<c>toroid</c>).</summary>
+    /// <summary>Inline core: the shape (<c>toroid</c>, <c>sleeve</c>, <c>two-hole</c>, <c>bobbin</c>).</summary>
     public string? Shape { get; set; }
 
-    /// <summary>Inline core: dimensions in millimetres.</summary>
-    public Entries.DimensionsMmDocument? DimensionsMm { get; set; }
+    /// <summary>Inline bobbin core: the family (<c>E</c>, <c>pot</c>, <c>RM</c>, <c>other</c>).</summary>
+    public string? Family { get; set; }
+
+    /// <summary>Inline core: dimensions in millimetres (see <see cref="DimensionsMmDocument"/> for each shape's fields).</summary>
+    public DimensionsMmDocument? DimensionsMm { get; set; }
+
+    /// <summary>Inline core: entered effective parameters (bobbin: required; two-hole: optional).</summary>
+    public EffectiveParametersDocument? Effective { get; set; }
+
+    /// <summary>Inline bobbin core: AL from the datasheet, nH per turn².</summary>
+    public double? AlNh { get; set; }
 
     /// <summary>Id of a catalogue material (overrides a catalogue core's own material).</summary>
     public string? MaterialId { get; set; }
@@ -53,16 +67,95 @@ public sealed class PlanWindingDocument
 
     /// <summary>The wire.</summary>
     public PlanWireDocument? Wire { get; set; }
+
+    /// <summary>Where the winding lies (default: spread over the whole core).</summary>
+    public PlanPlacementDocument? Placement { get; set; }
+
+    /// <summary>Insulation wrapped under this winding.</summary>
+    public PlanInsulationDocument? Insulation { get; set; }
+
+    /// <summary>Turn counts where taps are brought out.</summary>
+    public List<int>? Taps { get; set; }
+
+    /// <summary>RMS current in this winding, A (optional; otherwise derived from drive and load).</summary>
+    public double? RmsCurrentA { get; set; }
 }
 
-/// <summary>A round wire in a plan document, diameters in millimetres.</summary>
+/// <summary>
+/// A wire in a plan document. Give exactly one form: custom (<c>conductorDiameterMm</c>, optional
+/// <c>overallDiameterMm</c>), <c>litz</c>, or <c>hookUp</c>; optionally <c>strandsInHand</c> and <c>metal</c>.
+/// </summary>
 public sealed class PlanWireDocument
 {
-    /// <summary>Bare conductor diameter, mm.</summary>
+    /// <summary>Custom: bare conductor diameter, mm.</summary>
     public double? ConductorDiameterMm { get; set; }
 
-    /// <summary>Overall diameter over the insulation, mm; when absent the grade 1 enamel build is assumed.</summary>
+    /// <summary>Custom: overall diameter over the insulation, mm; when absent the grade 1 enamel build is assumed.</summary>
     public double? OverallDiameterMm { get; set; }
+
+    /// <summary>A Litz bundle.</summary>
+    public PlanLitzDocument? Litz { get; set; }
+
+    /// <summary>Hook-up wire with a thick insulation.</summary>
+    public PlanHookUpDocument? HookUp { get; set; }
+
+    /// <summary>Parallel wires wound side by side as one turn (default 1).</summary>
+    public int? StrandsInHand { get; set; }
+
+    /// <summary>Conductor metal: <c>copper</c> (default) or <c>aluminium</c>.</summary>
+    public string? Metal { get; set; }
+}
+
+/// <summary>A Litz bundle in a plan document.</summary>
+public sealed class PlanLitzDocument
+{
+    /// <summary>Number of strands.</summary>
+    public int? Strands { get; set; }
+
+    /// <summary>Bare diameter of each strand, mm.</summary>
+    public double? StrandDiameterMm { get; set; }
+
+    /// <summary>Overall diameter of the bundle, mm.</summary>
+    public double? OverallDiameterMm { get; set; }
+}
+
+/// <summary>Hook-up wire in a plan document.</summary>
+public sealed class PlanHookUpDocument
+{
+    /// <summary>Conductor diameter, mm.</summary>
+    public double? ConductorDiameterMm { get; set; }
+
+    /// <summary>Radial insulation thickness, mm.</summary>
+    public double? InsulationThicknessMm { get; set; }
+}
+
+/// <summary>A winding's placement in a plan document.</summary>
+public sealed class PlanPlacementDocument
+{
+    /// <summary><c>spread</c>, <c>sector</c>, <c>over</c> or <c>bifilar</c>.</summary>
+    public string? Kind { get; set; }
+
+    /// <summary>Sector start angle, degrees (0 ≤ start &lt; end ≤ 360).</summary>
+    public double? StartDegrees { get; set; }
+
+    /// <summary>Sector end angle, degrees.</summary>
+    public double? EndDegrees { get; set; }
+
+    /// <summary>Index of the winding this one lies over (<c>over</c>) or is paired with (<c>bifilar</c>); an earlier winding.</summary>
+    public int? Winding { get; set; }
+}
+
+/// <summary>An insulation wrap in a plan document.</summary>
+public sealed class PlanInsulationDocument
+{
+    /// <summary><c>paper</c>, <c>polyester</c>, <c>ptfe</c>, <c>polyimide</c> or <c>other</c>.</summary>
+    public string? Material { get; set; }
+
+    /// <summary>Total thickness, mm.</summary>
+    public double? ThicknessMm { get; set; }
+
+    /// <summary>Relative permittivity (default: the material's typical value; required for <c>other</c>).</summary>
+    public double? RelativePermittivity { get; set; }
 }
 
 /// <summary>Operating conditions in a plan document (SI).</summary>
@@ -82,4 +175,23 @@ public sealed class PlanOperatingDocument
 
     /// <summary>RMS drive voltage across the primary, V.</summary>
     public double? DriveVoltageRms { get; set; }
+
+    /// <summary><c>sine</c> (default), <c>square</c> or <c>pulse</c>.</summary>
+    public string? Waveform { get; set; }
+
+    /// <summary>Duty cycle of a pulse waveform, 0 &lt; D &lt; 1.</summary>
+    public double? DutyCycle { get; set; }
+
+    /// <summary>Ambient temperature, °C (default 25).</summary>
+    public double? AmbientTemperatureC { get; set; }
+}
+
+/// <summary>Length-to-cut allowance in a plan document.</summary>
+public sealed class PlanAllowanceDocument
+{
+    /// <summary>Lead length at each end, mm.</summary>
+    public double? LeadLengthMm { get; set; }
+
+    /// <summary>Margin on the wound length, percent.</summary>
+    public double? MarginPercent { get; set; }
 }

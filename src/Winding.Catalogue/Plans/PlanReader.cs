@@ -7,7 +7,7 @@ using Winding.Core.Materials;
 using Winding.Core.Plans;
 using Winding.Core.Quantities;
 using Winding.Core.Windings;
-using Winding.Core.Wire;
+
 
 namespace Winding.Catalogue.Plans;
 
@@ -26,12 +26,6 @@ public static class PlanReader
     /// <summary>Most identical cores in a stack.</summary>
     public const int MaximumStack = 100;
 
-    /// <summary>Thinnest accepted conductor, mm.</summary>
-    public const double MinimumWireMm = 0.01;
-
-    /// <summary>Thickest accepted conductor, mm.</summary>
-    public const double MaximumWireMm = 20;
-
     /// <summary>Reads <paramref name="document"/>, resolving catalogue ids in <paramref name="catalogue"/>.</summary>
     public static PlanReadResult Read(PlanDocument? document, CoreCatalogue catalogue)
     {
@@ -49,14 +43,15 @@ public static class PlanReader
         }
 
         var core = ReadCore(v, document.Core, catalogue);
-        var windings = ReadWindings(v, document.Windings);
+        var windings = ReadWindings(v, document.Windings, core?.Shape);
         var operating = ReadOperating(v, document.Operating);
-        if (!v.IsValid || core is null || windings is null)
+        var allowance = ReadAllowance(v, document.Allowance);
+        if (!v.IsValid || core is null || windings is null || allowance is null)
         {
             return new PlanReadResult(null, v.Errors);
         }
 
-        return new PlanReadResult(new TransformerPlan(document.Name, core, windings, operating, WireLengthAllowance.Default), v.Errors);
+        return new PlanReadResult(new TransformerPlan(document.Name, core, windings, operating, allowance), v.Errors);
     }
 
     private static PlanCore? ReadCore(FieldValidator v, PlanCoreDocument? document, CoreCatalogue catalogue)
@@ -67,14 +62,13 @@ public static class PlanReader
             return null;
         }
 
-        var stack = document.Stack is null ? 1 : v.WholeRange("core.stack", document.Stack, 1, MaximumStack, "cores");
-        ToroidCore? toroid = null;
+        CoreShape? shape = null;
         MagneticMaterial? material = null;
         if (!string.IsNullOrEmpty(document.CatalogueId))
         {
-            if (document.DimensionsMm is not null || document.Shape is not null)
+            if (document.DimensionsMm is not null || document.Shape is not null || document.Effective is not null || document.AlNh is not null || document.Family is not null)
             {
-                v.Add("core.catalogueId", "Give either a catalogueId or an inline core (shape and dimensionsMm), not both.");
+                v.Add("core.catalogueId", "Give either a catalogueId or an inline core (shape, dimensionsMm …), not both.");
             }
             else if (!catalogue.CoresById.TryGetValue(document.CatalogueId, out var entry))
             {
@@ -82,20 +76,13 @@ public static class PlanReader
             }
             else
             {
-                toroid = entry.Toroid;
+                shape = entry.Shape;
                 material = entry.Material.Material;
             }
         }
         else
         {
-            if (document.Shape != CoreShapes.Toroid)
-            {
-                v.Add("core.shape", document.Shape is null
-                    ? $"Required: the core shape (\"{CoreShapes.Toroid}\"), or a catalogueId instead."
-                    : $"Unknown shape '{document.Shape}': this version knows \"{CoreShapes.Toroid}\".");
-            }
-
-            toroid = ToroidDimensionsRules.Validate(v, "core.dimensionsMm", document.DimensionsMm);
+            shape = CoreShapeRules.Validate(v, "core", document.Shape, document.Family, document.DimensionsMm, document.Effective, document.AlNh);
             if (document.MaterialId is null && document.InitialPermeability is null)
             {
                 v.Add("core.materialId", "Required: a materialId from the catalogue, or an initialPermeability.");
@@ -120,10 +107,21 @@ public static class PlanReader
             material = mu is null ? null : MagneticMaterial.Create(string.Create(CultureInfo.InvariantCulture, $"μi {mu.Value:G4}"), mu.Value);
         }
 
-        return toroid is null || material is null || stack is null ? null : new PlanCore(toroid, stack.Value, material);
+        int? stack = 1;
+        if (document.Stack is not null)
+        {
+            stack = v.WholeRange("core.stack", document.Stack, 1, MaximumStack, "cores");
+            if (stack > 1 && shape is { CanStack: false })
+            {
+                v.Add("core.stack", $"A {shape.ShapeName} core is not stacked here: use 1.");
+                stack = null;
+            }
+        }
+
+        return shape is null || material is null || stack is null ? null : new PlanCore(shape, stack.Value, material);
     }
 
-    private static List<WindingSpec>? ReadWindings(FieldValidator v, List<PlanWindingDocument?>? documents)
+    private static List<WindingSpec>? ReadWindings(FieldValidator v, List<PlanWindingDocument?>? documents, CoreShape? shape)
     {
         if (documents is null || documents.Count == 0)
         {
@@ -148,6 +146,7 @@ public static class PlanReader
                 continue;
             }
 
+            var before = v.Errors.Count;
             var name = string.IsNullOrWhiteSpace(document.Name) ? $"winding {i + 1}" : document.Name.Trim();
             if (name.Length > 60)
             {
@@ -155,48 +154,151 @@ public static class PlanReader
             }
 
             var turns = v.WholeRange($"{prefix}.turns", document.Turns, 1, MaximumTurns, "turns");
-            var wire = ReadWire(v, $"{prefix}.wire", document.Wire);
-            if (turns is not null && wire is not null && name.Length <= 60)
+            var wire = WireRules.Read(v, $"{prefix}.wire", document.Wire);
+            var placement = ReadPlacement(v, $"{prefix}.placement", document.Placement, i, documents, shape);
+            var wrap = ReadInsulation(v, $"{prefix}.insulation", document.Insulation);
+            var taps = document.Taps ?? [];
+            if (turns is not null)
             {
-                windings.Add(WindingSpec.Create(name, turns.Value, wire));
+                for (var t = 0; t < taps.Count; t++)
+                {
+                    if (taps[t] < 1 || taps[t] >= turns)
+                    {
+                        v.Add($"{prefix}.taps[{t}]", string.Create(CultureInfo.InvariantCulture, $"A tap must be at a turn from 1 to {turns - 1} (the winding has {turns} turns)."));
+                    }
+                }
+
+                if (taps.Distinct().Count() != taps.Count)
+                {
+                    v.Add($"{prefix}.taps", "Each tap may be listed once.");
+                }
+            }
+
+            if (document.RmsCurrentA is not null)
+            {
+                v.Range($"{prefix}.rmsCurrentA", document.RmsCurrentA, 0, 1000, "A");
+            }
+
+            if (v.Errors.Count == before && turns is not null && wire is not null && placement is not null)
+            {
+                windings.Add(WindingSpec.Create(name, turns.Value, wire, placement, wrap, taps));
             }
         }
 
         return windings.Count == documents.Count ? windings : null;
     }
 
-    private static WindingWire? ReadWire(FieldValidator v, string prefix, PlanWireDocument? document)
+    private static WindingPlacement? ReadPlacement(FieldValidator v, string prefix, PlanPlacementDocument? document, int index, List<PlanWindingDocument?> all, CoreShape? shape)
+    {
+        if (document is null || document.Kind == "spread")
+        {
+            if (document is not null && (document.StartDegrees is not null || document.EndDegrees is not null || document.Winding is not null))
+            {
+                v.Add(prefix, "A spread winding takes no angles or winding index.");
+                return null;
+            }
+
+            return WindingPlacement.Spread;
+        }
+
+        switch (document.Kind)
+        {
+            case "sector":
+                if (shape is not null and not ToroidCore and not SleeveCore)
+                {
+                    v.Add($"{prefix}.kind", $"Sectors apply to toroids and sleeves, not to a {shape.ShapeName} core.");
+                    return null;
+                }
+
+                var start = v.Range($"{prefix}.startDegrees", document.StartDegrees, 0, 360, "degrees");
+                var end = v.Range($"{prefix}.endDegrees", document.EndDegrees, 0, 360, "degrees");
+                if (start is null || end is null)
+                {
+                    return null;
+                }
+
+                if (end <= start)
+                {
+                    v.Add($"{prefix}.endDegrees", "The sector must end after it starts (0 ≤ start < end ≤ 360).");
+                    return null;
+                }
+
+                return WindingPlacement.Sector(start.Value, end.Value);
+            case "over":
+            case "bifilar":
+                if (index == 0)
+                {
+                    v.Add($"{prefix}.kind", "The first winding cannot lie over or pair with another winding.");
+                    return null;
+                }
+
+                var other = v.WholeRange($"{prefix}.winding", document.Winding, 0, index - 1, "an earlier winding's index");
+                if (other is null)
+                {
+                    return null;
+                }
+
+                if (document.Kind == "over")
+                {
+                    return WindingPlacement.Over(other.Value);
+                }
+
+                var partner = all[other.Value];
+                if (partner?.Turns is { } partnerTurns && all[index]?.Turns is { } turns && partnerTurns != turns)
+                {
+                    v.Add($"{prefix}.winding", string.Create(CultureInfo.InvariantCulture, $"A bifilar pair is wound together, so both need the same turns ({partnerTurns} and {turns})."));
+                    return null;
+                }
+
+                if (partner?.Placement?.Kind == "bifilar")
+                {
+                    v.Add($"{prefix}.winding", "Pair with the first winding of the bifilar group.");
+                    return null;
+                }
+
+                return WindingPlacement.Bifilar(other.Value);
+            default:
+                v.Add($"{prefix}.kind", $"Unknown placement '{document.Kind}': use spread, sector, over or bifilar.");
+                return null;
+        }
+    }
+
+    private static InsulationWrap? ReadInsulation(FieldValidator v, string prefix, PlanInsulationDocument? document)
     {
         if (document is null)
         {
-            v.Add(prefix, "Required: the wire, with conductorDiameterMm (and overallDiameterMm if known).");
             return null;
         }
 
-        var conductor = v.Range($"{prefix}.conductorDiameterMm", document.ConductorDiameterMm, MinimumWireMm, MaximumWireMm, "mm");
-        if (conductor is null)
+        var thickness = v.Range($"{prefix}.thicknessMm", document.ThicknessMm, 0, 10, "mm");
+        double? permittivity;
+        if (document.Material is { } material && InsulationWrap.TypicalPermittivity.TryGetValue(material, out var typical))
         {
+            permittivity = document.RelativePermittivity is null ? typical : v.Range($"{prefix}.relativePermittivity", document.RelativePermittivity, 1, 20, string.Empty);
+        }
+        else if (document.Material is "other")
+        {
+            permittivity = v.Range($"{prefix}.relativePermittivity", document.RelativePermittivity, 1, 20, string.Empty);
+        }
+        else
+        {
+            v.Add($"{prefix}.material", "Required: paper, polyester, ptfe, polyimide or other.");
             return null;
         }
 
-        if (document.OverallDiameterMm is null)
+        return thickness is null || permittivity is null ? null : InsulationWrap.Create(document.Material, Length.FromMillimetres(thickness.Value), permittivity.Value);
+    }
+
+    private static WireLengthAllowance? ReadAllowance(FieldValidator v, PlanAllowanceDocument? document)
+    {
+        if (document is null)
         {
-            return WindingWire.Enamelled(Length.FromMillimetres(conductor.Value));
+            return WireLengthAllowance.Default;
         }
 
-        var overall = v.Range($"{prefix}.overallDiameterMm", document.OverallDiameterMm, MinimumWireMm, MaximumWireMm * 1.5, "mm");
-        if (overall is null)
-        {
-            return null;
-        }
-
-        if (overall < conductor)
-        {
-            v.Add($"{prefix}.overallDiameterMm", string.Create(CultureInfo.InvariantCulture, $"The overall diameter ({overall} mm) cannot be smaller than the conductor diameter ({conductor} mm)."));
-            return null;
-        }
-
-        return WindingWire.Solid(Length.FromMillimetres(conductor.Value), Length.FromMillimetres(overall.Value));
+        var lead = document.LeadLengthMm is null ? WireLengthAllowance.Default.LeadLengthPerEndM * 1e3 : v.Range("allowance.leadLengthMm", document.LeadLengthMm, 0, 5000, "mm");
+        var margin = document.MarginPercent is null ? WireLengthAllowance.Default.MarginFraction * 100 : v.Range("allowance.marginPercent", document.MarginPercent, 0, 100, "%");
+        return lead is null || margin is null ? null : new WireLengthAllowance(lead.Value * 1e-3, margin.Value / 100);
     }
 
     private static OperatingConditions? ReadOperating(FieldValidator v, PlanOperatingDocument? document)

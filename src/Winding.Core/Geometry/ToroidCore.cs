@@ -5,14 +5,21 @@ namespace Winding.Core.Geometry;
 /// <summary>
 /// A ring core (toroid) of rectangular cross-section, described by its outer diameter, inner diameter and height.
 /// </summary>
-public sealed record ToroidCore
+public sealed record ToroidCore : CoreShape
 {
-    private ToroidCore(Length outerDiameter, Length innerDiameter, Length height)
+    private ToroidCore(Length outerDiameter, Length innerDiameter, Length height, Length coatingThickness)
     {
         OuterDiameter = outerDiameter;
         InnerDiameter = innerDiameter;
         Height = height;
+        CoatingThickness = coatingThickness;
     }
+
+    /// <inheritdoc />
+    public override string ShapeName => "toroid";
+
+    /// <summary>Thickness of the insulating coating the winding sits on (0 for a bare core).</summary>
+    public Length CoatingThickness { get; }
 
     /// <summary>Outer diameter OD.</summary>
     public Length OuterDiameter { get; }
@@ -42,17 +49,35 @@ public sealed record ToroidCore
             throw new ArgumentOutOfRangeException(nameof(height), height, "The height must be greater than zero.");
         }
 
-        return new ToroidCore(outerDiameter, innerDiameter, height);
+        return new ToroidCore(outerDiameter, innerDiameter, height, Length.Zero);
+    }
+
+    /// <summary>
+    /// This toroid with an insulating coating of the given thickness. The coating does not change the magnetic
+    /// parameters; the winding sits on it (its hole is ID − 2c and each turn is longer).
+    /// </summary>
+    /// <exception cref="ArgumentOutOfRangeException">Negative, or so thick that it closes the hole.</exception>
+    public ToroidCore WithCoating(Length thickness)
+    {
+        if (thickness.Metres < 0 || 2 * thickness.Metres >= InnerDiameter.Metres)
+        {
+            throw new ArgumentOutOfRangeException(nameof(thickness), thickness, "The coating must be at least zero and thinner than half the inner diameter.");
+        }
+
+        return new ToroidCore(OuterDiameter, InnerDiameter, Height, thickness);
     }
 
     /// <summary>
     /// <paramref name="count"/> identical toroids stacked face to face and wound as one: geometrically a single ring of
     /// <paramref name="count"/> times the height (the IEC 60205 ring formulas then give C1/n and C2/n²).
     /// </summary>
-    public ToroidCore Stacked(int count)
+    public override CoreShape Stacked(int count) => StackedToroid(count);
+
+    /// <summary>The stacked toroid (see <see cref="Stacked"/>), typed.</summary>
+    public ToroidCore StackedToroid(int count)
     {
         ArgumentOutOfRangeException.ThrowIfLessThan(count, 1);
-        return new ToroidCore(OuterDiameter, InnerDiameter, Length.FromMetres(Height.Metres * count));
+        return new ToroidCore(OuterDiameter, InnerDiameter, Length.FromMetres(Height.Metres * count), CoatingThickness);
     }
 
     /// <summary>
@@ -63,7 +88,7 @@ public sealed record ToroidCore
     /// Valid for a sharp-edged rectangular section of uniform linear material with a uniformly distributed winding;
     /// chamfers reduce the area slightly and are not modelled.
     /// </summary>
-    public EffectiveParameters EffectiveParameters()
+    public override EffectiveParameters EffectiveParameters()
     {
         var r1M = InnerDiameter.Metres / 2;
         var r2M = OuterDiameter.Metres / 2;
@@ -74,6 +99,11 @@ public sealed record ToroidCore
         return new EffectiveParameters(c1PerM, c2PerM3);
     }
 
-    /// <summary>Window area: the area of the hole, π·ID²/4, in m².</summary>
-    public double WindowAreaM2 => Math.PI * InnerDiameter.Metres * InnerDiameter.Metres / 4;
+    /// <summary>Window area: the area of the hole inside the coating, π·(ID − 2c)²/4, in m².</summary>
+    public override double WindowAreaM2 => Math.PI * Math.Pow(InnerDiameter.Metres - 2 * CoatingThickness.Metres, 2) / 4;
+
+    /// <summary>Bare ring surface: two annular faces, the outer and the inner cylinder, m² (plane geometry).</summary>
+    public override double SurfaceAreaM2 =>
+        2 * Math.PI / 4 * (OuterDiameter.Metres * OuterDiameter.Metres - InnerDiameter.Metres * InnerDiameter.Metres)
+        + Math.PI * (OuterDiameter.Metres + InnerDiameter.Metres) * Height.Metres;
 }

@@ -1,14 +1,36 @@
 using Winding.Core.Geometry;
 using Winding.Core.Materials;
+using Winding.Core.Windings;
 
 namespace Winding.Core.Plans;
 
-/// <summary>The core of a plan: one toroid's geometry, how many identical cores are stacked, and the material.</summary>
-/// <param name="Toroid">The geometry of one core.</param>
-/// <param name="StackCount">Number of identical cores side by side, wound as one (at least 1).</param>
+/// <summary>The core of a plan: the shape of one core, how many identical cores are stacked, and the material.</summary>
+/// <param name="Shape">The shape of one core.</param>
+/// <param name="StackCount">Number of identical cores wound as one (at least 1; 1 for bobbins).</param>
 /// <param name="Material">The core material.</param>
-public sealed record PlanCore(ToroidCore Toroid, int StackCount, MagneticMaterial Material)
+public sealed record PlanCore(CoreShape Shape, int StackCount, MagneticMaterial Material)
 {
-    /// <summary>The stacked geometry that the winding goes around.</summary>
-    public ToroidCore WoundGeometry => Toroid.Stacked(StackCount);
+    /// <summary>The stacked shape that the windings go around.</summary>
+    public CoreShape WoundGeometry => Shape.Stacked(StackCount);
+
+    /// <summary>
+    /// Effective relative permeability of the wound core: μi for an ungapped core; with an air gap g in the path
+    /// μe = μi / (1 + μi·g/le) (gapped-core formula, Snelling 1988, ch. 2; valid for a small gap, g ≪ le).
+    /// </summary>
+    public double EffectivePermeability
+    {
+        get
+        {
+            var shape = WoundGeometry;
+            var mu = Material.InitialPermeability;
+            var gapM = shape.GapLengthM;
+            return gapM > 0 ? mu / (1 + mu * gapM / shape.EffectiveParameters().EffectiveLengthM) : mu;
+        }
+    }
+
+    /// <summary>AL of the wound core: an entered AL (bobbin cores) or μ0·μe/C1 (IEC 60205; Snelling 1988).</summary>
+    public InductanceFactor InductanceFactor =>
+        WoundGeometry is BobbinCore { EnteredAl: { } entered }
+            ? entered
+            : InductanceFactor.FromPermeability(EffectivePermeability, WoundGeometry.EffectiveParameters());
 }

@@ -1,12 +1,12 @@
 using System.Globalization;
 using Winding.Core.Windings;
-using Winding.Core.Wire;
 
 namespace Winding.Core.Plans;
 
 /// <summary>
-/// Evaluates a plan: core effective parameters and AL, then each winding in winding order, layered over the windings
-/// before it (each starts in the hole the previous ones left), with inductance, fit, length to cut and DC resistance.
+/// Evaluates a plan: the core's effective parameters, μe and AL; the windings placed in winding order
+/// (<see cref="WindingLayout"/>); per winding the inductance, fit, wound length, length to cut and DC resistance; and
+/// the warnings.
 /// </summary>
 public static class PlanEvaluator
 {
@@ -14,23 +14,23 @@ public static class PlanEvaluator
     public static PlanEvaluation Evaluate(TransformerPlan plan)
     {
         ArgumentNullException.ThrowIfNull(plan);
-        var geometry = plan.Core.WoundGeometry;
-        var effective = geometry.EffectiveParameters();
-        var al = InductanceFactor.FromPermeability(plan.Core.Material.InitialPermeability, effective);
-        var core = new CoreEvaluation(effective, geometry.WindowAreaM2, al);
+        var shape = plan.Core.WoundGeometry;
+        var effective = shape.EffectiveParameters();
+        var al = plan.Core.InductanceFactor;
+        var core = new CoreEvaluation(shape.ShapeName, effective, shape.WindowAreaM2, plan.Core.EffectivePermeability, al);
 
+        var fits = WindingLayout.Place(shape, plan.Windings);
         var warnings = new List<PlanWarning>();
         var windings = new List<WindingEvaluation>(plan.Windings.Count);
-        var hole = geometry.InnerDiameter;
         for (var i = 0; i < plan.Windings.Count; i++)
         {
             var spec = plan.Windings[i];
-            var fit = ToroidLayerFit.Fit(geometry, hole, spec.Wire, spec.Turns);
-            hole = fit.RemainingHoleDiameter;
+            var fit = fits[i];
+            var woundM = WireLengthAllowance.WoundLengthM(spec.Turns, fit.MeanTurnLengthM);
             var lengthM = plan.Allowance.LengthToCutM(spec.Turns, fit.MeanTurnLengthM);
-            var rdcOhm = ConductorMaterial.Copper.DcResistanceOhm(lengthM, spec.Wire.ConductorAreaM2);
-            var fill = spec.Turns * spec.Wire.ConductorAreaM2 / geometry.WindowAreaM2;
-            windings.Add(new WindingEvaluation(spec.Name, spec.Turns, spec.Wire, al.InductanceH(spec.Turns), fit, fill, lengthM, rdcOhm));
+            var rdcOhm = spec.Wire.Metal.DcResistanceOhm(lengthM, spec.Wire.ConductorAreaM2);
+            var fill = spec.Turns * spec.Wire.ConductorAreaM2 / shape.WindowAreaM2;
+            windings.Add(new WindingEvaluation(spec.Name, spec.Turns, spec.Wire, al.InductanceH(spec.Turns), fit, fill, woundM, lengthM, rdcOhm, spec.Taps));
 
             if (spec.Wire.OverallDiameterAssumed)
             {
@@ -41,13 +41,21 @@ public static class PlanEvaluator
                     Invariant($"Winding '{spec.Name}': no overall diameter given, so the IEC 60317-0-1 grade 1 enamel build was assumed ({spec.Wire.ElementOverallDiameter.Millimetres:0.###} mm over a {spec.Wire.StrandDiameter.Millimetres:0.###} mm conductor).")));
             }
 
-            if (!fit.Fits)
+            if (fit.Outcome == FitOutcome.DoesNotFit)
             {
                 warnings.Add(new PlanWarning(
                     WarningCodes.WireDoesNotFit,
                     WarningSeverity.Error,
                     $"windings[{i}].turns",
-                    Invariant($"Winding '{spec.Name}' does not fit: only {spec.Turns - fit.UnplacedTurns} of {spec.Turns} turns of {spec.Wire.ElementOverallDiameter.Millimetres:0.###} mm wire find room in the {(i == 0 ? "core's hole" : "hole the earlier windings leave")} ({fit.Layers} layer{(fit.Layers == 1 ? "" : "s")}). Use fewer turns, thinner wire or a core with a larger hole.")));
+                    Invariant($"Winding '{spec.Name}' does not fit: {fit.Reason} Use fewer turns, thinner wire or a larger core.")));
+            }
+            else if (fit.Outcome == FitOutcome.Tight)
+            {
+                warnings.Add(new PlanWarning(
+                    WarningCodes.FitsButTight,
+                    WarningSeverity.Caution,
+                    $"windings[{i}].turns",
+                    Invariant($"Winding '{spec.Name}' fits but is tight: {fit.Reason}")));
             }
         }
 

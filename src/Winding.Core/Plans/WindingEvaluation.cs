@@ -10,14 +10,18 @@ namespace Winding.Core.Plans;
 /// <param name="InductanceH">L = AL·N², H.</param>
 /// <param name="Fit">Layer-by-layer fit.</param>
 /// <param name="FillFactor">Copper cross-section of this winding over the core's window area (dimensionless).</param>
-/// <param name="WireLengthM">Length to cut, leads included, m.</param>
+/// <param name="WoundLengthM">N·MLT, m.</param>
+/// <param name="WireLengthM">Length to cut: wound length with margin, plus leads, m.</param>
 /// <param name="DcResistanceOhm">DC resistance of the whole length to cut at 20 °C, Ω.</param>
+/// <param name="Taps">Turn counts where taps are brought out.</param>
 public sealed record WindingEvaluation(
     string Name,
     int Turns,
     WindingWire Wire,
     double InductanceH,
-    LayerFit Fit,
+    WindingFit Fit,
     double FillFactor,
+    double WoundLengthM,
     double WireLengthM,
-    double DcResistanceOhm);
+    double DcResistanceOhm,
+    IReadOnlyList<int> Taps);

@@ -1,15 +1,19 @@
+using Winding.Core.Windings;
 using Winding.Core.Wire;
 
 namespace Winding.Core.Plans;
 
-/// <summary>One winding of a plan, in winding order: name, number of turns and wire.</summary>
+/// <summary>One winding of a plan, in winding order: name, turns, wire, placement, the wrap under it and its taps.</summary>
 public sealed record WindingSpec
 {
-    private WindingSpec(string name, int turns, WindingWire wire)
+    private WindingSpec(string name, int turns, WindingWire wire, WindingPlacement placement, InsulationWrap? wrap, IReadOnlyList<int> taps)
     {
         Name = name;
         Turns = turns;
         Wire = wire;
+        Placement = placement;
+        Wrap = wrap;
+        Taps = taps;
     }
 
     /// <summary>Display name, e.g. "primary".</summary>
@@ -21,13 +25,28 @@ public sealed record WindingSpec
     /// <summary>The wire.</summary>
     public WindingWire Wire { get; }
 
+    /// <summary>Where the winding lies.</summary>
+    public WindingPlacement Placement { get; }
+
+    /// <summary>Insulation wrapped under this winding, if any.</summary>
+    public InsulationWrap? Wrap { get; }
+
+    /// <summary>Turn counts (from the start) where taps are brought out, ascending, each between 1 and turns − 1.</summary>
+    public IReadOnlyList<int> Taps { get; }
+
     /// <summary>Creates a winding.</summary>
-    /// <exception cref="ArgumentOutOfRangeException">Fewer than one turn.</exception>
-    public static WindingSpec Create(string name, int turns, WindingWire wire)
+    /// <exception cref="ArgumentOutOfRangeException">Fewer than one turn, or a tap outside 1 … turns − 1.</exception>
+    public static WindingSpec Create(string name, int turns, WindingWire wire, WindingPlacement? placement = null, InsulationWrap? wrap = null, IReadOnlyList<int>? taps = null)
     {
         ArgumentNullException.ThrowIfNull(name);
         ArgumentNullException.ThrowIfNull(wire);
         ArgumentOutOfRangeException.ThrowIfLessThan(turns, 1);
-        return new WindingSpec(name, turns, wire);
+        var sortedTaps = (taps ?? []).Order().ToArray();
+        if (sortedTaps.Any(t => t < 1 || t >= turns) || sortedTaps.Distinct().Count() != sortedTaps.Length)
+        {
+            throw new ArgumentOutOfRangeException(nameof(taps), "Taps must be distinct turn counts from 1 to turns − 1.");
+        }
+
+        return new WindingSpec(name, turns, wire, placement ?? WindingPlacement.Spread, wrap, sortedTaps);
     }
 }

@@ -17,38 +17,65 @@ public sealed record EvaluationResponse(
 /// <param name="EffectiveLengthM">le, m (IEC 60205).</param>
 /// <param name="EffectiveAreaM2">Ae, m² (IEC 60205).</param>
 /// <param name="EffectiveVolumeM3">Ve, m³ (IEC 60205).</param>
-/// <param name="WindowAreaM2">Area of the hole, m².</param>
+/// <param name="WindowAreaM2">Area the windings pass through (ring hole, one hole of a two-hole core, bobbin window), m².</param>
 /// <param name="AlH">AL, H per turn².</param>
-public sealed record CoreResponse(double EffectiveLengthM, double EffectiveAreaM2, double EffectiveVolumeM3, double WindowAreaM2, double AlH);
+/// <param name="Shape">Shape word: toroid, sleeve, two-hole or bobbin.</param>
+/// <param name="EffectivePermeability">μe of the wound core (μi, or reduced by an air gap).</param>
+public sealed record CoreResponse(double EffectiveLengthM, double EffectiveAreaM2, double EffectiveVolumeM3, double WindowAreaM2, double AlH, string Shape, double EffectivePermeability);
 
 /// <summary>Results for one winding.</summary>
 /// <param name="Name">Winding name.</param>
 /// <param name="Turns">Turns.</param>
 /// <param name="InductanceH">L = AL·N², H.</param>
-/// <param name="Fits">True when every turn finds room.</param>
+/// <param name="Fits">True when every turn finds room (fits or tight).</param>
+/// <param name="FitOutcome"><c>fits</c>, <c>tight</c> or <c>does-not-fit</c>.</param>
+/// <param name="FitReason">The fit in plain words.</param>
 /// <param name="Layers">Layers used.</param>
 /// <param name="TurnsPerLayer">Turns in each layer, innermost first.</param>
 /// <param name="FillFactor">Copper area of this winding over the window area.</param>
-/// <param name="RemainingHoleDiameterM">Hole left after this winding, m.</param>
+/// <param name="RemainingHoleDiameterM">Hole left after this winding, m (ring cores; two-hole: a circle of the free area; null for bobbins).</param>
+/// <param name="RemainingWindowHeightM">Bobbin window height left after this winding, m (null for other shapes).</param>
 /// <param name="MeanTurnLengthM">Mean turn length, m.</param>
-/// <param name="WireLengthM">Length to cut, leads included (2 × 50 mm by default), m.</param>
+/// <param name="LayerMeanTurnLengthsM">Mean turn length of each layer, m.</param>
+/// <param name="WoundLengthM">N·MLT, m.</param>
+/// <param name="WireLengthM">Length to cut: wound length plus margin (5 % by default) plus two leads (50 mm each by default), m.</param>
 /// <param name="DcResistanceOhm">DC resistance of the length to cut at 20 °C, Ω.</param>
 /// <param name="OverallDiameterM">Overall wire diameter used for the fit, m.</param>
 /// <param name="OverallDiameterAssumed">True when the overall diameter was assumed (grade 1 enamel build).</param>
+/// <param name="Wire">The wire as understood by the engine.</param>
+/// <param name="Taps">Turn counts where taps are brought out.</param>
 public sealed record WindingResponse(
     string Name,
     int Turns,
     double InductanceH,
     bool Fits,
+    string FitOutcome,
+    string FitReason,
     int Layers,
     IReadOnlyList<int> TurnsPerLayer,
     double FillFactor,
-    double RemainingHoleDiameterM,
+    double? RemainingHoleDiameterM,
+    double? RemainingWindowHeightM,
     double MeanTurnLengthM,
+    IReadOnlyList<double> LayerMeanTurnLengthsM,
+    double WoundLengthM,
     double WireLengthM,
     double DcResistanceOhm,
     double OverallDiameterM,
-    bool OverallDiameterAssumed);
+    bool OverallDiameterAssumed,
+    WireResponse Wire,
+    IReadOnlyList<int> Taps);
+
+/// <summary>The wire of a winding as the engine understood it.</summary>
+/// <param name="Description">Plain description.</param>
+/// <param name="Kind"><c>solid</c>, <c>litz</c> or <c>hook-up</c>.</param>
+/// <param name="Metal">Conductor metal.</param>
+/// <param name="StrandDiameterM">Bare diameter of each conductor strand, m.</param>
+/// <param name="ParallelConductors">Conductors in parallel per turn (strands in hand × Litz strands).</param>
+/// <param name="ElementOverallDiameterM">Overall diameter of one wire or bundle, m.</param>
+/// <param name="StrandsInHand">Wires wound side by side as one turn.</param>
+/// <param name="ConductorAreaM2">Copper cross-section per turn, m².</param>
+public sealed record WireResponse(string Description, string Kind, string Metal, double StrandDiameterM, int ParallelConductors, double ElementOverallDiameterM, int StrandsInHand, double ConductorAreaM2);
 
 /// <summary>A finding about the plan.</summary>
 /// <param name="Code">Stable code, e.g. <c>wire-does-not-fit</c>.</param>

@@ -1,4 +1,6 @@
 using Winding.Core.Plans;
+using Winding.Core.Windings;
+using Winding.Core.Wire;
 
 namespace Winding.Web.Api;
 
@@ -16,21 +18,38 @@ public static class EvaluationResponseMapper
                 core.Effective.EffectiveAreaM2,
                 core.Effective.EffectiveVolumeM3,
                 core.WindowAreaM2,
-                core.InductanceFactor.HenriesPerTurnSquared),
+                core.InductanceFactor.HenriesPerTurnSquared,
+                core.ShapeName,
+                core.EffectivePermeability),
             [.. evaluation.Windings.Select(w => new WindingResponse(
                 w.Name,
                 w.Turns,
                 w.InductanceH,
                 w.Fit.Fits,
+                OutcomeWord(w.Fit.Outcome),
+                w.Fit.Reason,
                 w.Fit.Layers,
                 w.Fit.TurnsPerLayer,
                 w.FillFactor,
-                w.Fit.RemainingHoleDiameter.Metres,
+                w.Fit.RemainingHoleDiameter?.Metres,
+                w.Fit.RemainingWindowHeightM,
                 w.Fit.MeanTurnLengthM,
+                w.Fit.LayerMeanTurnLengthsM,
+                w.WoundLengthM,
                 w.WireLengthM,
                 w.DcResistanceOhm,
                 w.Wire.ElementOverallDiameter.Metres,
-                w.Wire.OverallDiameterAssumed))],
+                w.Wire.OverallDiameterAssumed,
+                new WireResponse(
+                    w.Wire.Description,
+                    w.Wire.Kind switch { WireKind.Litz => "litz", WireKind.HookUp => "hook-up", _ => "solid" },
+                    w.Wire.Metal.Name,
+                    w.Wire.StrandDiameter.Metres,
+                    w.Wire.ParallelConductors,
+                    w.Wire.ElementOverallDiameter.Metres,
+                    w.Wire.ElementsInHand,
+                    w.Wire.ConductorAreaM2),
+                w.Taps))],
             evaluation.TurnsRatio,
             evaluation.ImpedanceRatio,
             [.. evaluation.Warnings.Select(ToResponse)]);
@@ -42,6 +61,15 @@ public static class EvaluationResponseMapper
         ArgumentNullException.ThrowIfNull(warning);
         return new WarningResponse(warning.Code, SeverityWord(warning.Severity), warning.Field, warning.Message);
     }
+
+    /// <summary>The API word for a fit outcome.</summary>
+    public static string OutcomeWord(FitOutcome outcome) => outcome switch
+    {
+        FitOutcome.Fits => "fits",
+        FitOutcome.Tight => "tight",
+        FitOutcome.DoesNotFit => "does-not-fit",
+        _ => throw new ArgumentOutOfRangeException(nameof(outcome), outcome, "Unknown outcome."),
+    };
 
     /// <summary>The API word for a severity.</summary>
     public static string SeverityWord(WarningSeverity severity) => severity switch

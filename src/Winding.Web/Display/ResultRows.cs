@@ -1,5 +1,6 @@
 using System.Globalization;
 using Winding.Core.Plans;
+using Winding.Core.Windings;
 
 namespace Winding.Web.Display;
 
@@ -28,13 +29,29 @@ public static class ResultRows
             rows.Add(new($"{key}inductance", prefix + "Inductance L", EngineeringFormat.Format(w.InductanceH, "H"), "L = AL·N² at low excitation and low frequency."));
             rows.Add(new($"{key}turns-per-layer", prefix + "Turns per layer", string.Join(" + ", w.Fit.TurnsPerLayer.Select(t => t.ToString(CultureInfo.InvariantCulture))), "Turns touching on the inner circumference, layer by layer (common practice)."));
             rows.Add(new($"{key}layers", prefix + "Layers", w.Fit.Layers.ToString(CultureInfo.InvariantCulture), "Layers used inside the hole."));
-            rows.Add(new($"{key}fits", prefix + "Fits", w.Fit.Fits ? "yes" : $"no — {w.Fit.UnplacedTurns.ToString(CultureInfo.InvariantCulture)} turns without room", "Whether every turn finds room in the hole."));
-            rows.Add(new($"{key}hole-left", prefix + "Hole left", EngineeringFormat.Fixed(w.Fit.RemainingHoleDiameter.Millimetres, 2, "mm"), "Diameter of the hole left after this winding."));
+            rows.Add(new($"{key}fits", prefix + "Fit", OutcomeText(w.Fit.Outcome) + " — " + w.Fit.Reason, "Whether every turn finds room, and how comfortably: " + w.Fit.Method + "."));
+            if (w.Fit.RemainingHoleDiameter is { } hole)
+            {
+                rows.Add(new($"{key}hole-left", prefix + "Hole left", EngineeringFormat.Fixed(hole.Millimetres, 2, "mm"), "Diameter of the hole left after this winding."));
+            }
+
+            if (w.Fit.RemainingWindowHeightM is { } height)
+            {
+                rows.Add(new($"{key}height-left", prefix + "Window height left", EngineeringFormat.Fixed(height * 1e3, 2, "mm"), "Bobbin window height left after this winding."));
+            }
+
             rows.Add(new($"{key}fill", prefix + "Copper fill", EngineeringFormat.Fixed(w.FillFactor * 100, 1, "%"), "Copper cross-section over the window area."));
             rows.Add(new($"{key}mlt", prefix + "Mean turn length", EngineeringFormat.Fixed(w.Fit.MeanTurnLengthM * 1e3, 1, "mm"), "Perimeter of the core section grown by the wire build."));
-            rows.Add(new($"{key}wire-length", prefix + "Wire to cut", EngineeringFormat.Fixed(w.WireLengthM * 1e3, 0, "mm"), "N·MLT plus two 50 mm leads."));
+            rows.Add(new($"{key}wire-length", prefix + "Wire to cut", EngineeringFormat.Fixed(w.WireLengthM * 1e3, 0, "mm"), "N·MLT plus the margin, plus two leads."));
             rows.Add(new($"{key}rdc", prefix + "DC resistance (20 °C)", EngineeringFormat.Format(w.DcResistanceOhm, "Ω"), "ρ20·ℓ/A with ρ20 = 1/58 Ω·mm²/m (IEC 60028)."));
         }
+
+        static string OutcomeText(FitOutcome outcome) => outcome switch
+        {
+            FitOutcome.Fits => "fits",
+            FitOutcome.Tight => "tight",
+            _ => "does not fit",
+        };
 
         if (evaluation.TurnsRatio is { } ratio)
         {

@@ -95,7 +95,7 @@ public sealed class PlanPropertyTests
             {
                 Assert.True(double.IsFinite(w.InductanceH) && double.IsFinite(w.WireLengthM) && double.IsFinite(w.DcResistanceOhm));
                 Assert.True(double.IsFinite(w.Fit.MeanTurnLengthM) && w.Fit.MeanTurnLengthM > 0);
-                Assert.True(w.Fit.RemainingHoleDiameter.Metres >= 0);
+                Assert.True(w.Fit.RemainingHoleDiameter!.Value.Metres >= 0);
                 if (w.Fit.Fits)
                 {
                     var overallFill = w.Turns * wire.OverallAreaM2 / result.Core.WindowAreaM2;

@@ -28,7 +28,7 @@ public sealed class ToroidLayerFitTests
 
         Assert.True(fit.Fits);
         Assert.Equal(expected, fit.TurnsPerLayer);
-        Assert.Equal(idMm - 2 * 4 * wireMm, fit.RemainingHoleDiameter.Millimetres, 9);
+        Assert.Equal(idMm - 2 * 4 * wireMm, fit.RemainingHoleDiameter!.Value.Millimetres, 9);
     }
 
     [Fact]
@@ -55,7 +55,7 @@ public sealed class ToroidLayerFitTests
 
         Assert.False(fit.Fits);
         Assert.Empty(fit.TurnsPerLayer);
-        Assert.Equal(2, fit.RemainingHoleDiameter.Millimetres, 9);
+        Assert.Equal(2, fit.RemainingHoleDiameter!.Value.Millimetres, 9);
     }
 
     [Fact]
@@ -78,7 +78,7 @@ public sealed class ToroidLayerFitTests
         var wire = WindingWire.Solid(Length.FromMillimetres(0.5), Length.FromMillimetres(0.544));
         var first = ToroidLayerFit.Fit(core, core.InnerDiameter, wire, 10);
 
-        var second = ToroidLayerFit.Fit(core, first.RemainingHoleDiameter, wire, 100);
+        var second = ToroidLayerFit.Fit(core, first.RemainingHoleDiameter!.Value, wire, 100);
 
         Assert.Equal(48, second.TurnsPerLayer[0]);
         Assert.Equal(first.LayerMeanTurnLengthsM[0] + 2 * Math.PI * 0.544e-3, second.LayerMeanTurnLengthsM[0], 12);
