@@ -15,6 +15,14 @@ public sealed record ConductorMaterial(string Name, double Resistivity20OhmM, do
     /// </summary>
     public static ConductorMaterial Copper { get; } = new("copper", 1e-6 / 58, 0.00393);
 
+    /// <summary>
+    /// Aluminium of 61.0 % IACS conductivity: ρ20 = 0.028264 Ω·mm²/m = 2.8264×10⁻⁸ Ω·m (= ρ20 of IACS copper / 0.610)
+    /// and α20 = 0.00403 /K, the values IEC 60889:1987 (hard-drawn aluminium wire for overhead line conductors) specifies
+    /// for its wire; recalled from memory, not re-read. The same 61 % IACS figure is commonly used for annealed aluminium
+    /// winding wire (common practice, no source).
+    /// </summary>
+    public static ConductorMaterial Aluminium { get; } = new("aluminium", 0.028264e-6, 0.00403);
+
     /// <summary>Resistivity at a temperature in °C, ρ(T) = ρ20·[1 + α20·(T − 20)], in Ω·m.</summary>
     public double ResistivityOhmM(double temperatureC) =>
         Resistivity20OhmM * (1 + TemperatureCoefficient20PerK * (temperatureC - 20));
