@@ -77,16 +77,33 @@ public sealed class PlanWindingDocument
     /// <summary>Turn counts where taps are brought out.</summary>
     public List<int>? Taps { get; set; }
 
-    /// <summary>RMS current in this winding, A (optional; otherwise derived from drive and load).</summary>
+    /// <summary>RMS current in this winding, A (optional; otherwise derived from drive and load for the first and last winding).</summary>
     public double? RmsCurrentA { get; set; }
 }
 
 /// <summary>
-/// A wire in a plan document. Give exactly one form: custom (<c>conductorDiameterMm</c>, optional
-/// <c>overallDiameterMm</c>), <c>litz</c>, or <c>hookUp</c>; optionally <c>strandsInHand</c> and <c>metal</c>.
+/// A wire in a plan document. Give exactly one form: a standard wire by <c>standardId</c> (from
+/// <c>GET /api/v1/wires</c>); metric enamelled (<c>metricMm</c> with <c>grade</c> 1, 2 or 3); <c>awg</c> with
+/// <c>build</c> single or heavy; custom (<c>conductorDiameterMm</c>, optional <c>overallDiameterMm</c>); <c>litz</c>; or
+/// <c>hookUp</c>. Optionally <c>strandsInHand</c> and <c>metal</c>.
 /// </summary>
 public sealed class PlanWireDocument
 {
+    /// <summary>Id of a standard wire, e.g. <c>metric-0-500-g1</c> or <c>awg-24-heavy</c>.</summary>
+    public string? StandardId { get; set; }
+
+    /// <summary>Metric enamelled wire: nominal conductor diameter, mm (IEC 60317 series).</summary>
+    public double? MetricMm { get; set; }
+
+    /// <summary>Metric enamelled wire: grade 1, 2 or 3 (default 1).</summary>
+    public int? Grade { get; set; }
+
+    /// <summary>AWG size, 10 to 44.</summary>
+    public int? Awg { get; set; }
+
+    /// <summary>AWG film build: <c>single</c> (default) or <c>heavy</c>.</summary>
+    public string? Build { get; set; }
+
     /// <summary>Custom: bare conductor diameter, mm.</summary>
     public double? ConductorDiameterMm { get; set; }
 
@@ -184,6 +201,9 @@ public sealed class PlanOperatingDocument
 
     /// <summary>Ambient temperature, °C (default 25).</summary>
     public double? AmbientTemperatureC { get; set; }
+
+    /// <summary>k of the rule "primary reactance at f_min ≥ k × the impedance it works at" (default 4).</summary>
+    public double? ReactanceFactor { get; set; }
 }
 
 /// <summary>Length-to-cut allowance in a plan document.</summary>

@@ -3,6 +3,7 @@ using Winding.Catalogue.Entries;
 using Winding.Catalogue.Loading;
 using Winding.Catalogue.Validation;
 using Winding.Core.Geometry;
+using Winding.Core.Magnetics;
 using Winding.Core.Materials;
 using Winding.Core.Plans;
 using Winding.Core.Quantities;
@@ -181,7 +182,7 @@ public static class PlanReader
 
             if (v.Errors.Count == before && turns is not null && wire is not null && placement is not null)
             {
-                windings.Add(WindingSpec.Create(name, turns.Value, wire, placement, wrap, taps));
+                windings.Add(WindingSpec.Create(name, turns.Value, wire, placement, wrap, taps, document.RmsCurrentA));
             }
         }
 
@@ -313,14 +314,44 @@ public static class PlanReader
         var rs = v.Range("operating.sourceResistanceOhm", document.SourceResistanceOhm, 0, 1e7, "Ω");
         var rl = v.Range("operating.loadResistanceOhm", document.LoadResistanceOhm, 0, 1e7, "Ω", minimumExclusive: true);
         var drive = v.Range("operating.driveVoltageRms", document.DriveVoltageRms, 0, 1e5, "V");
+        var ambient = document.AmbientTemperatureC is null ? 25 : v.Range("operating.ambientTemperatureC", document.AmbientTemperatureC, -55, 150, "°C");
+        var k = document.ReactanceFactor is null ? OperatingConditions.DefaultReactanceFactor : v.Range("operating.reactanceFactor", document.ReactanceFactor, 0.1, 100, string.Empty);
+        VoltageWaveform? waveform = null;
+        switch (document.Waveform)
+        {
+            case null or "sine":
+                waveform = VoltageWaveform.Sine;
+                break;
+            case "square":
+                waveform = VoltageWaveform.Square;
+                break;
+            case "pulse":
+                var duty = v.Range("operating.dutyCycle", document.DutyCycle, VoltageWaveform.MinPulseDutyCycle, VoltageWaveform.MaxPulseDutyCycle, string.Empty);
+                waveform = duty is null ? null : VoltageWaveform.Pulse(duty.Value);
+                break;
+            default:
+                v.Add("operating.waveform", $"Unknown waveform '{document.Waveform}': use sine, square or pulse.");
+                break;
+        }
+
+        if (document.DutyCycle is not null && document.Waveform != "pulse")
+        {
+            v.Add("operating.dutyCycle", "A duty cycle applies to the pulse waveform only.");
+        }
+
         if (fMin is not null && fMax is not null && fMax <= fMin)
         {
             v.Add("operating.maxFrequencyHz", "The highest frequency must be above the lowest frequency.");
             return null;
         }
 
-        return fMin is null || fMax is null || rs is null || rl is null || drive is null
+        return fMin is null || fMax is null || rs is null || rl is null || drive is null || ambient is null || k is null || waveform is null
             ? null
-            : new OperatingConditions(fMin.Value, fMax.Value, rs.Value, rl.Value, drive.Value);
+            : new OperatingConditions(fMin.Value, fMax.Value, rs.Value, rl.Value, drive.Value)
+            {
+                Waveform = waveform,
+                AmbientTemperatureC = ambient.Value,
+                ReactanceFactor = k.Value,
+            };
     }
 }

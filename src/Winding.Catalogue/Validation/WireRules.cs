@@ -25,25 +25,40 @@ public static class WireRules
         ArgumentNullException.ThrowIfNull(v);
         if (document is null)
         {
-            v.Add(prefix, "Required: the wire — conductorDiameterMm (custom), litz or hookUp.");
+            v.Add(prefix, "Required: the wire — " + Forms + ".");
             return null;
         }
 
-        var forms = (document.ConductorDiameterMm is not null || document.OverallDiameterMm is not null ? 1 : 0)
+        var forms = (document.StandardId is not null ? 1 : 0)
+            + (document.MetricMm is not null || document.Grade is not null ? 1 : 0)
+            + (document.Awg is not null || document.Build is not null ? 1 : 0)
+            + (document.ConductorDiameterMm is not null || document.OverallDiameterMm is not null ? 1 : 0)
             + (document.Litz is not null ? 1 : 0)
             + (document.HookUp is not null ? 1 : 0);
         if (forms != 1)
         {
             v.Add(prefix, forms == 0
-                ? "Required: describe the wire — conductorDiameterMm (custom), litz or hookUp."
-                : "Give one form of wire only: conductorDiameterMm (custom), litz or hookUp.");
+                ? "Required: describe the wire — " + Forms + "."
+                : "Give one form of wire only: " + Forms + ".");
             return null;
         }
 
         var metal = ReadMetal(v, $"{prefix}.metal", document.Metal);
         var inHand = document.StrandsInHand is null ? 1 : v.WholeRange($"{prefix}.strandsInHand", document.StrandsInHand, 1, MaximumStrandsInHand, "wires in hand");
         WindingWire? wire;
-        if (document.Litz is { } litz)
+        if (document.StandardId is { } id)
+        {
+            wire = Standard(v, $"{prefix}.standardId", id, metal);
+        }
+        else if (document.MetricMm is not null || document.Grade is not null)
+        {
+            wire = Metric(v, prefix, document, metal);
+        }
+        else if (document.Awg is not null || document.Build is not null)
+        {
+            wire = Awg(v, prefix, document, metal);
+        }
+        else if (document.Litz is { } litz)
         {
             wire = Litz(v, $"{prefix}.litz", litz, metal);
         }
@@ -59,6 +74,8 @@ public static class WireRules
         return wire is null || inHand is null || metal is null ? null : wire.InHand(inHand.Value);
     }
 
+    private const string Forms = "standardId, metricMm (with grade), awg (with build), conductorDiameterMm (custom), litz or hookUp";
+
     private static ConductorMaterial? ReadMetal(FieldValidator v, string field, string? metal)
     {
         switch (metal)
@@ -66,11 +83,72 @@ public static class WireRules
             case null:
             case "copper":
                 return ConductorMaterial.Copper;
+            case "aluminium":
+                return ConductorMaterial.Aluminium;
             default:
-                v.Add(field, $"Unknown metal '{metal}': use copper.");
+                v.Add(field, $"Unknown metal '{metal}': use copper or aluminium.");
                 return null;
         }
     }
+
+    private static WindingWire? Standard(FieldValidator v, string field, string id, ConductorMaterial? metal)
+    {
+        if (!StandardWireTable.TryFind(id, out var standard) || standard is null)
+        {
+            v.Add(field, $"No standard wire with the id '{id}': see GET /api/v1/wires.");
+            return null;
+        }
+
+        return metal is null ? null : WithMetal(standard.ToWindingWire(), metal);
+    }
+
+    private static WindingWire? Metric(FieldValidator v, string prefix, PlanWireDocument document, ConductorMaterial? metal)
+    {
+        var nominal = v.Range($"{prefix}.metricMm", document.MetricMm, MinimumWireMm, MaximumWireMm, "mm");
+        var grade = document.Grade is null ? 1 : v.WholeRange($"{prefix}.grade", document.Grade, 1, 3, "grade");
+        if (nominal is null || grade is null || metal is null)
+        {
+            return null;
+        }
+
+        if (!MetricEnamelledWireTable.TryFind(Length.FromMillimetres(nominal.Value), out var size) || size is null)
+        {
+            var near = MetricEnamelledWireTable.Sizes.OrderBy(s => Math.Abs(s.NominalDiameter.Millimetres - nominal.Value)).Take(2).Select(s => s.Label);
+            v.Add($"{prefix}.metricMm", FormattableString.Invariant($"{nominal} mm is not a size of the IEC 60317 series; the nearest are {string.Join(" and ", near)}. For another size give conductorDiameterMm and overallDiameterMm."));
+            return null;
+        }
+
+        var g = (MetricWireGrade)grade.Value;
+        if (!size.HasGrade(g))
+        {
+            v.Add($"{prefix}.grade", $"Grade {grade} is not known for {size.Label}; use grade {string.Join(" or ", size.AvailableGrades.Select(a => (int)a))}.");
+            return null;
+        }
+
+        return WithMetal(MetricEnamelledWireTable.Wire(size, g), metal);
+    }
+
+    private static WindingWire? Awg(FieldValidator v, string prefix, PlanWireDocument document, ConductorMaterial? metal)
+    {
+        var gauge = v.WholeRange($"{prefix}.awg", document.Awg, AwgWireTable.FirstGauge, AwgWireTable.LastGauge, "AWG");
+        AwgBuild? build = document.Build switch
+        {
+            null or "single" => AwgBuild.Single,
+            "heavy" => AwgBuild.Heavy,
+            _ => null,
+        };
+        if (build is null)
+        {
+            v.Add($"{prefix}.build", $"Unknown build '{document.Build}': use single or heavy.");
+        }
+
+        return gauge is null || build is null || metal is null ? null : WithMetal(AwgWireTable.Wire(gauge.Value, build.Value), metal);
+    }
+
+    private static WindingWire WithMetal(WindingWire wire, ConductorMaterial metal) =>
+        metal == ConductorMaterial.Copper
+            ? wire
+            : WindingWire.Solid(wire.StrandDiameter, wire.ElementOverallDiameter, metal, wire.Description + ", " + metal.Name);
 
     private static WindingWire? Custom(FieldValidator v, string prefix, PlanWireDocument document, ConductorMaterial? metal)
     {

@@ -28,6 +28,31 @@ public sealed record PlanCore(CoreShape Shape, int StackCount, MagneticMaterial 
         }
     }
 
+    /// <summary>
+    /// The complex relative permeability of the wound core at a frequency, μ′ − jμ″, from the material's table. With an
+    /// air gap g the gapped-core formula is applied to the complex value, μe = μ / (1 + μ·g/le) (Snelling 1988, ch. 2).
+    /// A bobbin core with an entered AL scales the material's curve by AL·C1/(μ0·μi).
+    /// </summary>
+    /// <param name="frequencyHz">Frequency, Hz.</param>
+    /// <returns>μ′, μ″ of the wound core and whether the table had to be extrapolated.</returns>
+    public (double MuPrime, double MuDoublePrime, bool Extrapolated) PermeabilityAt(double frequencyHz)
+    {
+        var point = Material.Permeability.At(frequencyHz);
+        var mu = new System.Numerics.Complex(point.MuPrime, -point.MuDoublePrime);
+        var shape = WoundGeometry;
+        if (shape is BobbinCore { EnteredAl: { } entered })
+        {
+            var scale = entered.HenriesPerTurnSquared * shape.EffectiveParameters().CoreFactorC1PerM / (PhysicalConstants.VacuumPermeabilityHPerM * Material.InitialPermeability);
+            mu *= scale;
+        }
+        else if (shape.GapLengthM > 0)
+        {
+            mu /= 1 + mu * shape.GapLengthM / shape.EffectiveParameters().EffectiveLengthM;
+        }
+
+        return (mu.Real, -mu.Imaginary, point.IsExtrapolated);
+    }
+
     /// <summary>AL of the wound core: an entered AL (bobbin cores) or μ0·μe/C1 (IEC 60205; Snelling 1988).</summary>
     public InductanceFactor InductanceFactor =>
         WoundGeometry is BobbinCore { EnteredAl: { } entered }

@@ -5,8 +5,9 @@ namespace Winding.Core.Plans;
 
 /// <summary>
 /// Evaluates a plan: the core's effective parameters, μe and AL; the windings placed in winding order
-/// (<see cref="WindingLayout"/>); per winding the inductance, fit, wound length, length to cut and DC resistance; and
-/// the warnings.
+/// (<see cref="WindingLayout"/>); per winding the inductance, fit, wound length, length to cut and DC resistance; with
+/// operating conditions also the magnetising branch, currents, AC resistance, flux, losses and temperature
+/// (<see cref="OperatingAnalysis"/>); and the warnings.
 /// </summary>
 public static class PlanEvaluator
 {
@@ -30,7 +31,7 @@ public static class PlanEvaluator
             var lengthM = plan.Allowance.LengthToCutM(spec.Turns, fit.MeanTurnLengthM);
             var rdcOhm = spec.Wire.Metal.DcResistanceOhm(lengthM, spec.Wire.ConductorAreaM2);
             var fill = spec.Turns * spec.Wire.ConductorAreaM2 / shape.WindowAreaM2;
-            windings.Add(new WindingEvaluation(spec.Name, spec.Turns, spec.Wire, al.InductanceH(spec.Turns), fit, fill, woundM, lengthM, rdcOhm, spec.Taps));
+            windings.Add(new WindingEvaluation(spec.Name, spec.Turns, spec.Wire, al.InductanceH(spec.Turns), fit, fill, woundM, lengthM, rdcOhm, spec.Taps, null));
 
             if (spec.Wire.OverallDiameterAssumed)
             {
@@ -59,6 +60,19 @@ public static class PlanEvaluator
             }
         }
 
+        MagnetizingBranch? magnetizing = null;
+        OperatingPoint? point = null;
+        if (plan.Operating is not null)
+        {
+            var analysis = OperatingAnalysis.Analyse(plan, fits, [.. windings.Select(w => w.DcResistanceOhm)], warnings);
+            magnetizing = analysis.Magnetizing;
+            point = analysis.Point;
+            for (var i = 0; i < windings.Count; i++)
+            {
+                windings[i] = windings[i] with { Electrical = analysis.Windings[i] };
+            }
+        }
+
         double? turnsRatio = null;
         double? impedanceRatio = null;
         if (windings.Count >= 2)
@@ -68,7 +82,7 @@ public static class PlanEvaluator
         }
 
         var ordered = warnings.OrderByDescending(w => w.Severity).ToList();
-        return new PlanEvaluation(core, windings, turnsRatio, impedanceRatio, ordered);
+        return new PlanEvaluation(core, windings, turnsRatio, impedanceRatio, magnetizing, point, ordered);
     }
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);

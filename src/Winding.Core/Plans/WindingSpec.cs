@@ -6,8 +6,9 @@ namespace Winding.Core.Plans;
 /// <summary>One winding of a plan, in winding order: name, turns, wire, placement, the wrap under it and its taps.</summary>
 public sealed record WindingSpec
 {
-    private WindingSpec(string name, int turns, WindingWire wire, WindingPlacement placement, InsulationWrap? wrap, IReadOnlyList<int> taps)
+    private WindingSpec(string name, int turns, WindingWire wire, WindingPlacement placement, InsulationWrap? wrap, IReadOnlyList<int> taps, double? rmsCurrentA)
     {
+        RmsCurrentA = rmsCurrentA;
         Name = name;
         Turns = turns;
         Wire = wire;
@@ -34,9 +35,12 @@ public sealed record WindingSpec
     /// <summary>Turn counts (from the start) where taps are brought out, ascending, each between 1 and turns − 1.</summary>
     public IReadOnlyList<int> Taps { get; }
 
+    /// <summary>RMS current stated for this winding, A; null to derive it from the drive and the load.</summary>
+    public double? RmsCurrentA { get; }
+
     /// <summary>Creates a winding.</summary>
-    /// <exception cref="ArgumentOutOfRangeException">Fewer than one turn, or a tap outside 1 … turns − 1.</exception>
-    public static WindingSpec Create(string name, int turns, WindingWire wire, WindingPlacement? placement = null, InsulationWrap? wrap = null, IReadOnlyList<int>? taps = null)
+    /// <exception cref="ArgumentOutOfRangeException">Fewer than one turn, a tap outside 1 … turns − 1, or a negative current.</exception>
+    public static WindingSpec Create(string name, int turns, WindingWire wire, WindingPlacement? placement = null, InsulationWrap? wrap = null, IReadOnlyList<int>? taps = null, double? rmsCurrentA = null)
     {
         ArgumentNullException.ThrowIfNull(name);
         ArgumentNullException.ThrowIfNull(wire);
@@ -47,6 +51,11 @@ public sealed record WindingSpec
             throw new ArgumentOutOfRangeException(nameof(taps), "Taps must be distinct turn counts from 1 to turns − 1.");
         }
 
-        return new WindingSpec(name, turns, wire, placement ?? WindingPlacement.Spread, wrap, sortedTaps);
+        if (rmsCurrentA is { } current && !(current >= 0 && double.IsFinite(current)))
+        {
+            throw new ArgumentOutOfRangeException(nameof(rmsCurrentA), rmsCurrentA, "The RMS current must be finite and at least 0.");
+        }
+
+        return new WindingSpec(name, turns, wire, placement ?? WindingPlacement.Spread, wrap, sortedTaps, rmsCurrentA);
     }
 }

@@ -5,13 +5,50 @@ namespace Winding.Web.Api;
 /// <param name="Windings">Per-winding results in winding order.</param>
 /// <param name="TurnsRatio">Last winding's turns over the first's (null with a single winding).</param>
 /// <param name="ImpedanceRatio">Square of the turns ratio (null with a single winding).</param>
+/// <param name="MagnetizingInductanceH">The primary's magnetising inductance at minFrequencyHz, from μ′(f), H (null without operating conditions).</param>
+/// <param name="Magnetizing">The reactance rule at minFrequencyHz (null without operating conditions).</param>
+/// <param name="OperatingPoint">Flux, losses and temperature (null without operating conditions).</param>
 /// <param name="Warnings">Findings, most severe first.</param>
 public sealed record EvaluationResponse(
     CoreResponse Core,
     IReadOnlyList<WindingResponse> Windings,
     double? TurnsRatio,
     double? ImpedanceRatio,
+    double? MagnetizingInductanceH,
+    MagnetizingResponse? Magnetizing,
+    OperatingPointResponse? OperatingPoint,
     IReadOnlyList<WarningResponse> Warnings);
+
+/// <summary>The primary's reactance at the bottom of the band against the rule X ≥ k·Z.</summary>
+/// <param name="FrequencyHz">minFrequencyHz.</param>
+/// <param name="ReactanceOhm">2π·f·L_m, Ω.</param>
+/// <param name="ImpedanceSeenOhm">The larger of the source resistance and the reflected load, Ω.</param>
+/// <param name="ReactanceFactor">k.</param>
+/// <param name="PrimaryTurnsNeeded">Primary turns meeting the rule at the low end of the AL tolerance.</param>
+public sealed record MagnetizingResponse(double FrequencyHz, double ReactanceOhm, double ImpedanceSeenOhm, double ReactanceFactor, int PrimaryTurnsNeeded);
+
+/// <summary>The operating point at the worst case.</summary>
+/// <param name="PeakFluxDensityT">B̂ at minFrequencyHz, T.</param>
+/// <param name="SaturationFluxDensityT">B_sat at the hot temperature, T (null when unknown).</param>
+/// <param name="SaturationMargin">1 − B̂/B_sat (null when unknown).</param>
+/// <param name="CoreLossW">Core loss, W (null when the material has no loss data).</param>
+/// <param name="CoreLossMethod">How the core loss was found.</param>
+/// <param name="CopperLossW">Copper loss with AC resistance at maxFrequencyHz, W.</param>
+/// <param name="CopperLossDcW">Copper loss with DC resistance, W.</param>
+/// <param name="TemperatureRiseK">Temperature rise over ambient, K.</param>
+/// <param name="HotTemperatureC">Ambient plus rise, °C.</param>
+/// <param name="SurfaceAreaM2">Surface the heat leaves from, m².</param>
+public sealed record OperatingPointResponse(
+    double PeakFluxDensityT,
+    double? SaturationFluxDensityT,
+    double? SaturationMargin,
+    double? CoreLossW,
+    string CoreLossMethod,
+    double CopperLossW,
+    double CopperLossDcW,
+    double TemperatureRiseK,
+    double HotTemperatureC,
+    double SurfaceAreaM2);
 
 /// <summary>Core results.</summary>
 /// <param name="EffectiveLengthM">le, m (IEC 60205).</param>
@@ -44,6 +81,13 @@ public sealed record CoreResponse(double EffectiveLengthM, double EffectiveAreaM
 /// <param name="OverallDiameterAssumed">True when the overall diameter was assumed (grade 1 enamel build).</param>
 /// <param name="Wire">The wire as understood by the engine.</param>
 /// <param name="Taps">Turn counts where taps are brought out.</param>
+/// <param name="AcResistanceOhm">Resistance at maxFrequencyHz and ambient temperature, Ω (null without operating conditions).</param>
+/// <param name="AcResistanceMethod">How Rac was found (Dowell round-wire, or Litz per strand).</param>
+/// <param name="SkinDepthM">Skin depth at maxFrequencyHz, m.</param>
+/// <param name="SkinDepthRatio">Conductor (strand) diameter over skin depth.</param>
+/// <param name="RmsCurrentA">RMS current, A (stated or derived).</param>
+/// <param name="CurrentDensityAPerM2">RMS current over the copper cross-section, A/m².</param>
+/// <param name="CopperLossW">I²·Rac, W.</param>
 public sealed record WindingResponse(
     string Name,
     int Turns,
@@ -64,7 +108,14 @@ public sealed record WindingResponse(
     double OverallDiameterM,
     bool OverallDiameterAssumed,
     WireResponse Wire,
-    IReadOnlyList<int> Taps);
+    IReadOnlyList<int> Taps,
+    double? AcResistanceOhm,
+    string? AcResistanceMethod,
+    double? SkinDepthM,
+    double? SkinDepthRatio,
+    double? RmsCurrentA,
+    double? CurrentDensityAPerM2,
+    double? CopperLossW);
 
 /// <summary>The wire of a winding as the engine understood it.</summary>
 /// <param name="Description">Plain description.</param>

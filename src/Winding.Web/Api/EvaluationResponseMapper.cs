@@ -1,3 +1,4 @@
+using Winding.Core.Conductors;
 using Winding.Core.Plans;
 using Winding.Core.Windings;
 using Winding.Core.Wire;
@@ -49,9 +50,21 @@ public static class EvaluationResponseMapper
                     w.Wire.ElementOverallDiameter.Metres,
                     w.Wire.ElementsInHand,
                     w.Wire.ConductorAreaM2),
-                w.Taps))],
+                w.Taps,
+                w.Electrical?.AcResistanceOhm,
+                w.Electrical is { } e ? (e.AcFactor.Method == AcResistanceMethod.DowellRoundWire ? "Dowell, round wire" : "Litz, per strand") : null,
+                w.Electrical?.SkinDepthM,
+                w.Electrical?.AcFactor.SkinDepthRatio,
+                w.Electrical?.RmsCurrentA,
+                w.Electrical?.CurrentDensityAPerM2,
+                w.Electrical?.CopperLossW))],
             evaluation.TurnsRatio,
             evaluation.ImpedanceRatio,
+            evaluation.Magnetizing?.InductanceH,
+            evaluation.Magnetizing is { } m ? new MagnetizingResponse(m.FrequencyHz, m.ReactanceOhm, m.ImpedanceSeenOhm, m.ReactanceFactor, m.PrimaryTurnsNeeded) : null,
+            evaluation.Operating is { } p
+                ? new OperatingPointResponse(p.PeakFluxDensityT, p.SaturationFluxDensityT, p.SaturationMargin, p.CoreLossW, p.CoreLossMethod, p.CopperLossW, p.CopperLossDcW, p.TemperatureRiseK, p.HotTemperatureC, p.SurfaceAreaM2)
+                : null,
             [.. evaluation.Warnings.Select(ToResponse)]);
     }
 

@@ -4,6 +4,7 @@ using Winding.Catalogue.Loading;
 using Winding.Catalogue.Plans;
 using Winding.Catalogue.Validation;
 using Winding.Core.Plans;
+using Winding.Core.Wire;
 using Winding.Web.Hosting;
 
 namespace Winding.Web.Api;
@@ -26,8 +27,32 @@ public static class WindingApi
             .Produces<EvaluationResponse>(StatusCodes.Status200OK, "application/json")
             .ProducesValidationProblem()
             .WithMetadata(new RequestSizeLimitAttribute(MaximumBodyBytes));
+        v1.MapGet("/wires", ListWires)
+            .WithName("ListWires")
+            .WithSummary("The standard wire table")
+            .WithDescription("Every standard wire the planner knows: IEC 60317-0-1 metric enamelled sizes in grades 1–3 and AWG 10–44 (ASTM B258) in single and heavy film build, with conductor and maximum overall diameters and copper resistance per metre at 20 °C. Each id can be used as wire.standardId in a plan.")
+            .Produces<IReadOnlyList<WireListResponse>>(StatusCodes.Status200OK, "application/json");
         return endpoints;
     }
+
+    private static Microsoft.AspNetCore.Http.HttpResults.JsonHttpResult<List<WireListResponse>> ListWires() => TypedResults.Json(
+        StandardWireTable.All.Select(w => new WireListResponse(
+            w.Id,
+            w.System == StandardWireSystem.Metric ? "metric" : "awg",
+            w.SizeLabel,
+            w.InsulationLabel,
+            w.Description,
+            w.ConductorDiameter.Metres,
+            w.OverallDiameter.Metres,
+            w.ConductorAreaM2,
+            w.ResistancePerMetre20COhmPerM,
+            w.OverallDiameterProvenance switch
+            {
+                ValueProvenance.Read => "read",
+                ValueProvenance.FromMemoryCrossChecked => "from-memory-cross-checked",
+                _ => "from-memory",
+            })).ToList(),
+        ApiJson.Options);
 
     private static async Task<IResult> EvaluateAsync(HttpRequest request, CatalogueProvider catalogue, CancellationToken cancellationToken)
     {

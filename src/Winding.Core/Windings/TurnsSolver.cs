@@ -1,0 +1,49 @@
+namespace Winding.Core.Windings;
+
+/// <summary>
+/// How many turns a winding needs. L = AL·N² (IEC 60205 definition of AL) solved for N, rounded up; with an AL
+/// tolerance t the low end AL·(1 − t) is used so that the target is met for every core in the batch (physics-sources
+/// §2.3, common practice).
+/// </summary>
+public static class TurnsSolver
+{
+    /// <summary>Turns for at least <paramref name="inductanceH"/>: N = ⌈√(L / (AL·(1 − t)))⌉.</summary>
+    /// <param name="al">AL of the core.</param>
+    /// <param name="inductanceH">Target inductance, H, positive.</param>
+    /// <param name="alTolerance">AL tolerance as a fraction, 0 ≤ t &lt; 1 (0 for the nominal AL).</param>
+    public static int ForInductance(InductanceFactor al, double inductanceH, double alTolerance)
+    {
+        if (!(inductanceH > 0) || !double.IsFinite(inductanceH))
+        {
+            throw new ArgumentOutOfRangeException(nameof(inductanceH), inductanceH, "The target inductance must be finite and positive.");
+        }
+
+        if (!(alTolerance >= 0 && alTolerance < 1))
+        {
+            throw new ArgumentOutOfRangeException(nameof(alTolerance), alTolerance, "The tolerance must lie in [0, 1).");
+        }
+
+        var exact = Math.Sqrt(inductanceH / (al.HenriesPerTurnSquared * (1 - alTolerance)));
+        return (int)Math.Min(int.MaxValue, Math.Ceiling(exact - 1e-9));
+    }
+
+    /// <summary>
+    /// Turns so that the winding's reactance at <paramref name="frequencyHz"/> is at least <paramref name="factor"/> times
+    /// <paramref name="impedanceOhm"/>: 2π·f·AL(f)·(1 − t)·N² ≥ k·Z (the rule X ≥ k·Z at the bottom of the band is common
+    /// practice, no source; k = 4 by default). AL(f) is the AL at that frequency, μ0·μe′(f)/C1.
+    /// </summary>
+    /// <param name="alAtFrequency">AL at the frequency (from μ′(f)).</param>
+    /// <param name="frequencyHz">Frequency, Hz, positive.</param>
+    /// <param name="impedanceOhm">Impedance the winding works at, Ω, positive.</param>
+    /// <param name="factor">k, positive.</param>
+    /// <param name="alTolerance">AL tolerance fraction, 0 ≤ t &lt; 1.</param>
+    public static int ForReactance(InductanceFactor alAtFrequency, double frequencyHz, double impedanceOhm, double factor, double alTolerance)
+    {
+        if (!(frequencyHz > 0) || !(impedanceOhm > 0) || !(factor > 0) || !double.IsFinite(frequencyHz * impedanceOhm * factor))
+        {
+            throw new ArgumentOutOfRangeException(nameof(frequencyHz), frequencyHz, "Frequency, impedance and factor must be finite and positive.");
+        }
+
+        return ForInductance(alAtFrequency, factor * impedanceOhm / (2 * Math.PI * frequencyHz), alTolerance);
+    }
+}
