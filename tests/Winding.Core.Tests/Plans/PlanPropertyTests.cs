@@ -1,5 +1,6 @@
 using CsCheck;
 using Winding.Core.Geometry;
+using Winding.Core.Magnetics;
 using Winding.Core.Materials;
 using Winding.Core.Plans;
 using Winding.Core.Quantities;
@@ -105,5 +106,63 @@ public sealed class PlanPropertyTests
 
             Assert.Equal(result.Windings.Any(w => !w.Fit.Fits), result.Warnings.Any(x => x.Code == WarningCodes.WireDoesNotFit));
         });
+    }
+
+    private static readonly Gen<CoreShape> Shapes = Gen.OneOf(
+        Toroids.Select(t => (CoreShape)t),
+        Gen.Select(Gen.Double[3, 60], Gen.Double[0.1, 0.9], Gen.Double[2, 60], Gen.Double[0, 0.2])
+            .Select((od, ratio, length, gap) => (CoreShape)SleeveCore.Create(Length.FromMillimetres(od), Length.FromMillimetres(od * ratio), Length.FromMillimetres(length), Length.FromMillimetres(gap))),
+        Gen.Select(Gen.Double[0.5, 8], Gen.Double[1.2, 3], Gen.Double[3, 40])
+            .Select((hole, spacingRatio, length) => (CoreShape)TwoHoleCore.Create(Length.FromMillimetres(length), Length.FromMillimetres(hole), Length.FromMillimetres(hole * spacingRatio), Length.FromMillimetres(hole * spacingRatio + hole * 2), Length.FromMillimetres(hole * 2))),
+        Gen.Select(Gen.Double[5, 500], Gen.Double[10, 150], Gen.Double[2, 40], Gen.Double[1, 20])
+            .Select((ae, le, breadth, height) => (CoreShape)BobbinCore.Create("E", ae * 1e-6, le * 1e-3, null, Length.FromMillimetres(breadth), Length.FromMillimetres(height), CentreLeg.Round(Length.FromMillimetres(Math.Sqrt(ae))), Length.Zero)));
+
+    private static readonly Gen<MagneticMaterial> Materials = Gen.Select(Gen.Double[5, 15_000], Gen.Bool).Select((mu, tabulated) =>
+        MagneticMaterial.Create(
+            "property",
+            mu,
+            tabulated ? ComplexPermeabilityCurve.Create([new(1e4, mu, mu * 0.01), new(1e6, mu, mu * 0.05), new(1e8, mu * 0.2, mu * 0.5)]) : null,
+            SaturationFluxDensity.Create(0.45, 0.35),
+            SteinmetzParameters.Create(10, 1.4, 2.6, 1e4, 1e6, 0.001, 0.3),
+            null,
+            200,
+            0.25));
+
+    private static readonly Gen<OperatingConditions> Operating =
+        Gen.Select(Gen.Double[1, 7], Gen.Double[0.1, 3], Gen.Double[0, 1000], Gen.Double[0.1, 10_000], Gen.Double[0, 1000], Gen.Int[0, 2])
+            .Select((logFmin, decades, rs, rl, volts, wave) => new OperatingConditions(Math.Pow(10, logFmin), Math.Pow(10, logFmin + decades), rs, rl, volts)
+            {
+                Waveform = wave == 0 ? VoltageWaveform.Sine : wave == 1 ? VoltageWaveform.Square : VoltageWaveform.Pulse(0.3),
+            });
+
+    [Fact]
+    public void Evaluate_EveryShapeWithOperatingConditions_IsFiniteAndRacAtLeastRdc()
+    {
+        // Rac ≥ Rdc (skin and proximity effect only add loss; Dowell 1966) and no NaN or infinity anywhere.
+        Gen.Select(Shapes, Materials, Operating, Gen.Int[1, 400], Gen.Int[1, 400], WireMm).Sample((shape, material, op, n1, n2, wireMm) =>
+        {
+            var wire = WindingWire.Enamelled(Length.FromMillimetres(wireMm));
+            var plan = new TransformerPlan(
+                "property",
+                new PlanCore(shape, 1, material),
+                [WindingSpec.Create("a", n1, wire), WindingSpec.Create("b", n2, wire)],
+                op,
+                WireLengthAllowance.Default);
+
+            var result = PlanEvaluator.Evaluate(plan);
+
+            var point = result.Operating!;
+            Assert.True(double.IsFinite(point.PeakFluxDensityT) && double.IsFinite(point.TemperatureRiseK) && double.IsFinite(point.CopperLossW));
+            Assert.True(point.CoreLossW is null || double.IsFinite(point.CoreLossW.Value));
+            Assert.True(double.IsFinite(result.Magnetizing!.ReactanceOhm) && result.Magnetizing.PrimaryTurnsNeeded >= 1);
+            foreach (var w in result.Windings)
+            {
+                var e = w.Electrical!;
+                var rdcAmbient = w.DcResistanceOhm * w.Wire.Metal.ResistivityOhmM(op.AmbientTemperatureC) / w.Wire.Metal.Resistivity20OhmM;
+                Assert.True(e.AcResistanceOhm >= rdcAmbient * (1 - 1e-12), $"Rac {e.AcResistanceOhm} < Rdc {rdcAmbient}");
+                Assert.True(double.IsFinite(e.CurrentDensityAPerM2) && double.IsFinite(e.CopperLossW));
+                Assert.True(double.IsFinite(w.WireLengthM) && w.WireLengthM > 0);
+            }
+        }, iter: 300);
     }
 }
