@@ -1,6 +1,10 @@
 namespace Winding.Catalogue.Entries;
 
-/// <summary>The JSON form of a material catalogue entry (<c>"kind": "material"</c>), one per file.</summary>
+/// <summary>
+/// The JSON form of a material catalogue entry (<c>"kind": "material"</c>), one per file. Units are spelled out in the
+/// keys and converted once at load; everything but <c>initialPermeability</c>, <c>family</c> and <c>source</c> is
+/// optional.
+/// </summary>
 public sealed class MaterialEntryDocument
 {
     /// <summary>Always <c>material</c>.</summary>
@@ -12,9 +16,30 @@ public sealed class MaterialEntryDocument
     /// <summary>Display name by class, e.g. "NiZn, μi 125".</summary>
     public string? Name { get; set; }
 
-    /// <summary>Initial relative permeability μi.</summary>
+    /// <summary>Material family: <c>NiZn</c>, <c>MnZn</c> or <c>iron powder</c> (see <see cref="MaterialFamilies"/>).</summary>
+    public string? Family { get; set; }
+
+    /// <summary>Initial relative permeability μi (dimensionless).</summary>
     public double? InitialPermeability { get; set; }
 
-    /// <summary>Where the values come from.</summary>
+    /// <summary>Series complex permeability μs′, μs″ against frequency, in increasing frequency.</summary>
+    public List<PermeabilityPointDocument?>? Permeability { get; set; }
+
+    /// <summary>Saturation flux density at 25 °C and 100 °C, T.</summary>
+    public SaturationFluxDensityDocument? SaturationFluxDensityT { get; set; }
+
+    /// <summary>Steinmetz loss parameters with the range they were fitted over.</summary>
+    public SteinmetzDocument? Steinmetz { get; set; }
+
+    /// <summary>Bulk resistivity, Ω·m.</summary>
+    public double? ResistivityOhmM { get; set; }
+
+    /// <summary>Curie temperature, °C.</summary>
+    public double? CurieTemperatureC { get; set; }
+
+    /// <summary>AL tolerance, ± percent; 25 when not given.</summary>
+    public double? AlTolerancePercent { get; set; }
+
+    /// <summary>Where the values come from (required).</summary>
     public string? Source { get; set; }
 }

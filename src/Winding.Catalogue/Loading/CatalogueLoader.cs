@@ -1,7 +1,6 @@
 using System.Text.Json;
 using Winding.Catalogue.Entries;
 using Winding.Catalogue.Validation;
-using Winding.Core.Materials;
 
 namespace Winding.Catalogue.Loading;
 
@@ -121,14 +120,14 @@ public static class CatalogueLoader
     {
         var validator = new FieldValidator();
         CheckCommon(validator, document.Id, document.Name);
-        var mu = validator.Range("initialPermeability", document.InitialPermeability, 1, MaximumPermeability, string.Empty);
-        if (!validator.IsValid)
+        var material = MaterialRules.Validate(validator, document);
+        if (!validator.IsValid || material is null)
         {
             Report(file, validator, problems);
             return null;
         }
 
-        return new CatalogueMaterial(document.Id!, document.Name!, MagneticMaterial.Create(document.Name!, mu!.Value), document.Source ?? string.Empty);
+        return new CatalogueMaterial(document.Id!, document.Name!, document.Family!, material, document.Source!);
     }
 
     private static CatalogueCore? ToCore(string file, CoreEntryDocument document, Dictionary<string, CatalogueMaterial> materials, List<CatalogueProblem> problems)

