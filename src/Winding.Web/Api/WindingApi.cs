@@ -4,6 +4,7 @@ using Winding.Catalogue.Loading;
 using Winding.Catalogue.Plans;
 using Winding.Catalogue.Validation;
 using Winding.Core.Plans;
+using Winding.Core.Windings;
 using Winding.Core.Wire;
 using Winding.Web.Hosting;
 
@@ -25,6 +26,14 @@ public static class WindingApi
             .WithDescription("Takes a plan (core, windings, operating conditions; dimensions and wire diameters in mm, everything else SI) and returns the core's effective parameters and AL, and per winding the inductance, layer fit, length to cut and DC resistance, with warnings. Invalid input answers 400 with application/problem+json whose errors name each bad field.")
             .Accepts<PlanDocument>("application/json")
             .Produces<EvaluationResponse>(StatusCodes.Status200OK, "application/json")
+            .ProducesValidationProblem()
+            .WithMetadata(new RequestSizeLimitAttribute(MaximumBodyBytes));
+        v1.MapPost("/wire-choices", WireChoicesAsync)
+            .WithName("WireChoices")
+            .WithSummary("Rank wire sizes for each winding of a plan")
+            .WithDescription("Takes a plan with operating conditions and, for each winding, ranks the standard wires (and strands in hand) that fit with the other windings unchanged, stay within the winding's share of the window (0.4 utilisation), keep the current density at or under 4 A/mm² and stay within two skin depths at maxFrequencyHz. The current is the winding's rmsCurrentA, or derived from drive and load.")
+            .Accepts<PlanDocument>("application/json")
+            .Produces<WireChoicesResponse>(StatusCodes.Status200OK, "application/json")
             .ProducesValidationProblem()
             .WithMetadata(new RequestSizeLimitAttribute(MaximumBodyBytes));
         v1.MapGet("/wires", ListWires)
@@ -64,6 +73,58 @@ public static class WindingApi
 
         var evaluation = PlanEvaluator.Evaluate(read.Plan!);
         return TypedResults.Json(EvaluationResponseMapper.ToResponse(evaluation), ApiJson.Options);
+    }
+
+    private static async Task<IResult> WireChoicesAsync(HttpRequest request, CatalogueProvider catalogue, CancellationToken cancellationToken)
+    {
+        var read = await ReadPlanAsync(request, catalogue.Catalogue, cancellationToken);
+        if (!read.IsValid)
+        {
+            return ValidationProblem(read.Errors);
+        }
+
+        var plan = read.Plan!;
+        if (plan.Operating is null)
+        {
+            return ValidationProblem([new FieldError("operating", "Required for wire choices: the band (for skin depth) and drive and load (for the currents).")]);
+        }
+
+        var evaluation = PlanEvaluator.Evaluate(plan);
+        var windings = new List<WindingWireChoicesResponse>(plan.Windings.Count);
+        for (var i = 0; i < plan.Windings.Count; i++)
+        {
+            var currentA = evaluation.Windings[i].Electrical!.RmsCurrentA;
+            var frequencyHz = plan.Operating.MaxFrequencyHz;
+            if (!(currentA > 0))
+            {
+                windings.Add(new WindingWireChoicesResponse(i, plan.Windings[i].Name, currentA, frequencyHz, "No current is known for this winding: give its rmsCurrentA.", []));
+                continue;
+            }
+
+            var report = WireGaugePicker.ChooseWithReport(plan, i, Math.Min(currentA, WireGaugePicker.MaximumCurrentA), frequencyHz);
+            windings.Add(new WindingWireChoicesResponse(
+                i,
+                plan.Windings[i].Name,
+                currentA,
+                frequencyHz,
+                report.Summary,
+                [.. report.Choices.Select(c => new WireChoiceResponse(
+                    c.Rank,
+                    c.StandardId,
+                    c.Description,
+                    c.StrandsInHand,
+                    c.Passes,
+                    EvaluationResponseMapper.OutcomeWord(c.Outcome),
+                    c.Layers,
+                    c.CurrentDensityAPerM2,
+                    c.SkinDepthRatio,
+                    c.DcResistance20COhm,
+                    c.AcResistanceOhm,
+                    c.CopperLossW,
+                    c.Reasons))]));
+        }
+
+        return TypedResults.Json(new WireChoicesResponse(windings), ApiJson.Options);
     }
 
     /// <summary>Reads and validates a plan from a JSON request body; a JSON error becomes a field error at its path.</summary>
