@@ -20,14 +20,14 @@ public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
 
         await page.GetByRole(AriaRole.Combobox).First.ClickAsync();
         await page.GetByRole(AriaRole.Option, new PageGetByRoleOptions { Name = "Toroid 36 × 23 × 15 mm · NiZn, μi 125" }).ClickAsync();
-        var inductance = page.Locator("[data-testid=value-inductance]");
-        await page.Locator("#turns").FillAsync("8");
+        var inductance = page.Locator("[data-testid=value-w0-inductance]");
+        await page.Locator("#windings-0-turns").FillAsync("8");
         await Assertions.Expect(inductance).ToHaveTextAsync(await ExpectedInductance(8));
 
-        await page.Locator("#turns").FillAsync("24");
+        await page.Locator("#windings-0-turns").FillAsync("24");
 
         await Assertions.Expect(inductance).ToHaveTextAsync(await ExpectedInductance(24));
-        await Assertions.Expect(page.Locator("[data-testid=value-layers]")).ToHaveTextAsync("1");
+        await Assertions.Expect(page.Locator("[data-testid=value-w0-layers]")).ToHaveTextAsync("1");
         await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "plan-page.png"), FullPage = true });
     }
 
@@ -37,11 +37,11 @@ public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
         await using var session = await BrowserSession.StartAsync();
         var page = await session.OpenInteractiveAsync(_server.BaseAddress);
 
-        await page.Locator("#turns").FillAsync("twelve");
+        await page.Locator("#windings-0-turns").FillAsync("twelve");
 
-        await Assertions.Expect(page.GetByText("'twelve' is not a whole number")).ToBeVisibleAsync();
-        await page.Locator("#turns").FillAsync("12");
-        await Assertions.Expect(page.Locator("[data-testid=value-inductance]")).ToBeVisibleAsync();
+        await Assertions.Expect(page.GetByText("'twelve' is not a number")).ToBeVisibleAsync();
+        await page.Locator("#windings-0-turns").FillAsync("12");
+        await Assertions.Expect(page.Locator("[data-testid=value-w0-inductance]")).ToBeVisibleAsync();
         await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "plan-page-recovered.png") });
     }
 

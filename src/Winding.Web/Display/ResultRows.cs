@@ -4,60 +4,122 @@ using Winding.Core.Windings;
 
 namespace Winding.Web.Display;
 
-/// <summary>Turns an evaluation into the labelled, formatted rows the results panel shows.</summary>
+/// <summary>Turns an evaluation into the titled, formatted sections the results panel shows.</summary>
 public static class ResultRows
 {
-    /// <summary>Rows for the core and each winding of <paramref name="evaluation"/>.</summary>
-    public static IReadOnlyList<ResultRow> For(PlanEvaluation evaluation)
+    /// <summary>Sections for the core, each winding, the band and the operating point.</summary>
+    public static IReadOnlyList<ResultSection> For(PlanEvaluation evaluation, string materialName, double alTolerance)
     {
         ArgumentNullException.ThrowIfNull(evaluation);
-        var core = evaluation.Core;
-        var rows = new List<ResultRow>
-        {
-            new("al", "AL", EngineeringFormat.Format(core.InductanceFactor.HenriesPerTurnSquared, "H") + "/turn²", "Inductance per turn squared, AL = μ0·μi·Ae/le (IEC 60205 effective parameters)."),
-            new("le", "Effective length le", EngineeringFormat.Fixed(core.Effective.EffectiveLengthM * 1e3, 2, "mm"), "Effective magnetic path length, IEC 60205 ring-core formula."),
-            new("ae", "Effective area Ae", EngineeringFormat.Fixed(core.Effective.EffectiveAreaM2 * 1e6, 2, "mm²"), "Effective cross-section, IEC 60205 ring-core formula."),
-            new("ve", "Effective volume Ve", EngineeringFormat.Fixed(core.Effective.EffectiveVolumeM3 * 1e9, 0, "mm³"), "Effective volume le·Ae, IEC 60205."),
-        };
-
-        var multiple = evaluation.Windings.Count > 1;
+        var sections = new List<ResultSection> { Core(evaluation.Core, materialName, alTolerance) };
         for (var i = 0; i < evaluation.Windings.Count; i++)
         {
-            var w = evaluation.Windings[i];
-            var prefix = multiple ? w.Name + ": " : string.Empty;
-            var key = multiple ? $"w{i}-" : string.Empty;
-            rows.Add(new($"{key}inductance", prefix + "Inductance L", EngineeringFormat.Format(w.InductanceH, "H"), "L = AL·N² at low excitation and low frequency."));
-            rows.Add(new($"{key}turns-per-layer", prefix + "Turns per layer", string.Join(" + ", w.Fit.TurnsPerLayer.Select(t => t.ToString(CultureInfo.InvariantCulture))), "Turns touching on the inner circumference, layer by layer (common practice)."));
-            rows.Add(new($"{key}layers", prefix + "Layers", w.Fit.Layers.ToString(CultureInfo.InvariantCulture), "Layers used inside the hole."));
-            rows.Add(new($"{key}fits", prefix + "Fit", OutcomeText(w.Fit.Outcome) + " — " + w.Fit.Reason, "Whether every turn finds room, and how comfortably: " + w.Fit.Method + "."));
-            if (w.Fit.RemainingHoleDiameter is { } hole)
-            {
-                rows.Add(new($"{key}hole-left", prefix + "Hole left", EngineeringFormat.Fixed(hole.Millimetres, 2, "mm"), "Diameter of the hole left after this winding."));
-            }
-
-            if (w.Fit.RemainingWindowHeightM is { } height)
-            {
-                rows.Add(new($"{key}height-left", prefix + "Window height left", EngineeringFormat.Fixed(height * 1e3, 2, "mm"), "Bobbin window height left after this winding."));
-            }
-
-            rows.Add(new($"{key}fill", prefix + "Copper fill", EngineeringFormat.Fixed(w.FillFactor * 100, 1, "%"), "Copper cross-section over the window area."));
-            rows.Add(new($"{key}mlt", prefix + "Mean turn length", EngineeringFormat.Fixed(w.Fit.MeanTurnLengthM * 1e3, 1, "mm"), "Perimeter of the core section grown by the wire build."));
-            rows.Add(new($"{key}wire-length", prefix + "Wire to cut", EngineeringFormat.Fixed(w.WireLengthM * 1e3, 0, "mm"), "N·MLT plus the margin, plus two leads."));
-            rows.Add(new($"{key}rdc", prefix + "DC resistance (20 °C)", EngineeringFormat.Format(w.DcResistanceOhm, "Ω"), "ρ20·ℓ/A with ρ20 = 1/58 Ω·mm²/m (IEC 60028)."));
+            sections.Add(Winding(evaluation.Windings[i], i));
         }
 
-        static string OutcomeText(FitOutcome outcome) => outcome switch
+        if (evaluation.TurnsRatio is not null || evaluation.Magnetizing is not null)
         {
-            FitOutcome.Fits => "fits",
-            FitOutcome.Tight => "tight",
-            _ => "does not fit",
-        };
+            sections.Add(Band(evaluation));
+        }
 
+        if (evaluation.Operating is { } point)
+        {
+            sections.Add(Operating(point));
+        }
+
+        return sections;
+    }
+
+    private static ResultSection Core(CoreEvaluation core, string materialName, double alTolerance) => new("core", "Core", [
+        new("shape", "Shape", core.ShapeName + " · " + materialName, "The core's shape and material class."),
+        new("al", "AL", EngineeringFormat.Format(core.InductanceFactor.HenriesPerTurnSquared, "H") + "/turn² ± " + Fixed(alTolerance * 100, 0) + " %", "Inductance per turn squared, AL = μ0·μe·Ae/le (IEC 60205), with the material's AL tolerance."),
+        new("mue", "Effective permeability μe", Fixed(core.EffectivePermeability, 1), "μi, reduced by an air gap as μi/(1 + μi·g/le) (Snelling 1988)."),
+        new("le", "Effective length le", Fixed(core.Effective.EffectiveLengthM * 1e3, 2) + " mm", "Effective magnetic path length (IEC 60205)."),
+        new("ae", "Effective area Ae", Fixed(core.Effective.EffectiveAreaM2 * 1e6, 2) + " mm²", "Effective cross-section (IEC 60205)."),
+        new("ve", "Effective volume Ve", Fixed(core.Effective.EffectiveVolumeM3 * 1e9, 0) + " mm³", "Effective volume le·Ae (IEC 60205)."),
+        new("window", "Window area", Fixed(core.WindowAreaM2 * 1e6, 2) + " mm²", "Area the windings pass through."),
+    ]);
+
+    private static ResultSection Winding(WindingEvaluation w, int index)
+    {
+        var key = $"w{index}-";
+        var rows = new List<ResultRow>
+        {
+            new(key + "inductance", "Inductance L", EngineeringFormat.Format(w.InductanceH, "H"), "L = AL·N² at low excitation and low frequency."),
+            new(key + "fits", "Fit", OutcomeText(w.Fit.Outcome) + " — " + w.Fit.Reason, "Whether every turn finds room, and how comfortably: " + w.Fit.Method + "."),
+            new(key + "turns-per-layer", "Turns per layer", w.Fit.TurnsPerLayer.Count == 0 ? "—" : string.Join(" + ", w.Fit.TurnsPerLayer.Select(t => t.ToString(CultureInfo.InvariantCulture))), "Turns in each layer, innermost first (common practice convention)."),
+            new(key + "layers", "Layers", w.Fit.Layers.ToString(CultureInfo.InvariantCulture), "Layers used."),
+        };
+        if (w.Fit.RemainingHoleDiameter is { } hole)
+        {
+            rows.Add(new(key + "hole-left", "Hole left", Fixed(hole.Millimetres, 2) + " mm", "Diameter of the hole left after this winding."));
+        }
+
+        if (w.Fit.RemainingWindowHeightM is { } height)
+        {
+            rows.Add(new(key + "height-left", "Window height left", Fixed(height * 1e3, 2) + " mm", "Bobbin window height left after this winding."));
+        }
+
+        rows.Add(new(key + "wire", "Wire", w.Wire.Description + (w.Wire.ElementsInHand > 1 ? $", {w.Wire.ElementsInHand} in hand" : string.Empty), "The wire as the engine understood it."));
+        rows.Add(new(key + "fill", "Copper fill", Fixed(w.FillFactor * 100, 1) + " %", "Copper cross-section of this winding over the window area."));
+        rows.Add(new(key + "mlt", "Mean turn length", Fixed(w.Fit.MeanTurnLengthM * 1e3, 1) + " mm", "Perimeter of the core section grown by the build under the turn."));
+        rows.Add(new(key + "wire-length", "Wire to cut", Fixed(w.WireLengthM * 1e3, 0) + " mm", "N·MLT plus the margin, plus two leads."));
+        rows.Add(new(key + "rdc", "DC resistance (20 °C)", EngineeringFormat.Format(w.DcResistanceOhm, "Ω"), "ρ·ℓ/A of the length to cut (IEC 60028 copper)."));
+        if (w.Electrical is { } e)
+        {
+            rows.Add(new(key + "rac", "AC resistance (f max)", EngineeringFormat.Format(e.AcResistanceOhm, "Ω") + " (×" + Fixed(e.AcFactor.RacPerRdc, 2) + ")", "Skin and proximity effect at the top of the band: Dowell 1966 with the round-wire porosity, or per strand for Litz."));
+            rows.Add(new(key + "skin", "Skin depth (f max)", EngineeringFormat.Format(e.SkinDepthM, "m") + " · d/δ = " + Fixed(e.AcFactor.SkinDepthRatio, 1), "δ = √(ρ/(π·f·μ0)); conductors much thicker than 2δ waste copper."));
+            rows.Add(new(key + "current", "RMS current", EngineeringFormat.Format(e.RmsCurrentA, "A") + (e.CurrentStated ? " (stated)" : " (from drive and load)"), "Stated, or derived from the drive and load through an ideal transformer."));
+            rows.Add(new(key + "density", "Current density", Fixed(e.CurrentDensityAPerM2 / 1e6, 2) + " A/mm²", "RMS current over the copper cross-section; about 4 A/mm² is a common limit for small windings."));
+            rows.Add(new(key + "copper-loss", "Copper loss", EngineeringFormat.Format(e.CopperLossW, "W"), "I²·Rac."));
+        }
+
+        return new ResultSection($"winding-{index}", "Winding: " + w.Name, rows);
+    }
+
+    private static ResultSection Band(PlanEvaluation evaluation)
+    {
+        var rows = new List<ResultRow>();
         if (evaluation.TurnsRatio is { } ratio)
         {
-            rows.Add(new("turns-ratio", "Turns ratio", ratio.ToString("G4", CultureInfo.InvariantCulture), "Last winding's turns over the first's."));
+            rows.Add(new("turns-ratio", "Turns ratio", "1 : " + ratio.ToString("G4", CultureInfo.InvariantCulture), "Last winding's turns over the first's."));
+            rows.Add(new("impedance-ratio", "Impedance ratio", "1 : " + evaluation.ImpedanceRatio!.Value.ToString("G4", CultureInfo.InvariantCulture), "The square of the turns ratio."));
         }
 
-        return rows;
+        if (evaluation.Magnetizing is { } m)
+        {
+            rows.Add(new("magnetizing", "Magnetising inductance (f min)", EngineeringFormat.Format(m.InductanceH, "H"), "The primary's series inductance at the bottom of the band, from μ′(f)."));
+            rows.Add(new("reactance", "Reactance (f min)", Fixed(m.ReactanceOhm, 1) + " Ω against " + Fixed(m.ReactanceFactor * m.ImpedanceSeenOhm, 1) + " Ω wanted", $"X = 2π·f·L; the rule X ≥ {m.ReactanceFactor:0.##}·Z with Z the larger of the source and the reflected load (common practice)."));
+            rows.Add(new("turns-needed", "Primary turns for the band", m.PrimaryTurnsNeeded.ToString(CultureInfo.InvariantCulture), "Turns meeting X ≥ k·Z even at the low end of the AL tolerance."));
+        }
+
+        return new ResultSection("band", "Band and ratio", rows);
     }
+
+    private static ResultSection Operating(OperatingPoint p)
+    {
+        var rows = new List<ResultRow>
+        {
+            new("flux", "Peak flux density (f min)", Fixed(p.PeakFluxDensityT * 1e3, 2) + " mT", "Faraday's law: B̂ = V/(4.44·f·N·Ae) for a sine; volt-seconds for square and pulse."),
+        };
+        if (p.SaturationFluxDensityT is { } bsat)
+        {
+            rows.Add(new("saturation", "Saturation (hot)", Fixed(bsat * 1e3, 0) + " mT · margin " + Fixed(p.SaturationMargin!.Value * 100, 0) + " %", "B_sat of the material at the hot temperature, and 1 − B̂/B_sat."));
+        }
+
+        rows.Add(new("core-loss", "Core loss", p.CoreLossW is { } core ? EngineeringFormat.Format(core, "W") + " (" + p.CoreLossMethod + ")" : "unknown (" + p.CoreLossMethod + ")", "Steinmetz or iGSE within the material's fitted range; otherwise the small-signal loss from μ″."));
+        rows.Add(new("copper-loss", "Copper loss", EngineeringFormat.Format(p.CopperLossW, "W") + " (DC: " + EngineeringFormat.Format(p.CopperLossDcW, "W") + ")", "Sum of I²·Rac at the top of the band (and with DC resistance)."));
+        rows.Add(new("temperature", "Temperature rise", Fixed(p.TemperatureRiseK, 1) + " K → " + Fixed(p.HotTemperatureC, 0) + " °C", "From total loss over the surface (McLyman's surface-dissipation relation; ±30 % or worse)."));
+        return new ResultSection("operating", "Operating point", rows);
+    }
+
+    private static string OutcomeText(FitOutcome outcome) => outcome switch
+    {
+        FitOutcome.Fits => "fits",
+        FitOutcome.Tight => "tight",
+        _ => "does not fit",
+    };
+
+    private static string Fixed(double value, int decimals) =>
+        value.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
 }

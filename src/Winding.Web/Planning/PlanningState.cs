@@ -1,30 +1,42 @@
-using System.Globalization;
 using Winding.Catalogue.Entries;
 using Winding.Catalogue.Plans;
 using Winding.Catalogue.Validation;
 using Winding.Core.Plans;
+using Winding.Core.Windings;
+using Winding.Web.Display;
 using Winding.Web.Hosting;
 
 namespace Winding.Web.Planning;
 
 /// <summary>
-/// The planning page's view model (one per circuit): the user's inputs as typed, the field errors, and the evaluation.
-/// It builds the same <see cref="PlanDocument"/> the API takes and reads it through the same <see cref="PlanReader"/>,
-/// so the page and the API agree. Inputs are parsed with the invariant culture (a decimal comma is accepted too).
+/// The planning page's view model (one per circuit): the user's inputs as typed, the field errors keyed by the plan
+/// document's field paths (<c>windings[1].turns</c>), the evaluation, and wire suggestions. It builds the same
+/// <see cref="PlanDocument"/> the API takes and reads it through the same <see cref="PlanReader"/>, so the page and the API
+/// agree. Numbers accept SI prefixes and a decimal comma (<see cref="EngineeringNumber"/>).
 /// </summary>
 public sealed class PlanningState
 {
-    private readonly CatalogueProvider _catalogue;
-    private readonly Dictionary<PlanField, string> _errors = [];
+    /// <summary>Most windings the page offers.</summary>
+    public const int MaximumWindings = 8;
 
-    /// <summary>Creates the state with the first catalogue core selected and a small starting winding.</summary>
+    private readonly CatalogueProvider _catalogue;
+    private readonly Dictionary<string, string> _errors = new(StringComparer.Ordinal);
+    private readonly List<WindingDraft> _windings = [];
+    private readonly Dictionary<int, WireChoiceReport> _suggestions = [];
+
+    /// <summary>Creates the state with a mid-size ring core and a primary and a secondary.</summary>
     public PlanningState(CatalogueProvider catalogue)
     {
         ArgumentNullException.ThrowIfNull(catalogue);
         _catalogue = catalogue;
-        CoreId = Cores.Count > 0 ? Cores[0].Id : null;
+        CoreId = catalogue.Catalogue.CoresById.ContainsKey(DefaultCoreId) ? DefaultCoreId : Cores.Count > 0 ? Cores[0].Id : null;
+        _windings.Add(new WindingDraft { Name = "primary", Turns = "4", ConductorDiameter = "0.5" });
+        _windings.Add(new WindingDraft { Name = "secondary", Turns = "8", ConductorDiameter = "0.4" });
         Recalculate();
     }
+
+    /// <summary>The core selected when the page opens, if the catalogue has it.</summary>
+    public const string DefaultCoreId = "toroid-36x23x15-nizn-125";
 
     /// <summary>The cores to pick from.</summary>
     public IReadOnlyList<CatalogueCore> Cores => _catalogue.Catalogue.Cores;
@@ -35,26 +47,29 @@ public sealed class PlanningState
     /// <summary>The selected core, if any.</summary>
     public CatalogueCore? SelectedCore => CoreId is not null && _catalogue.Catalogue.CoresById.TryGetValue(CoreId, out var c) ? c : null;
 
-    /// <summary>Turns as typed.</summary>
-    public string TurnsText { get; private set; } = "10";
+    /// <summary>The windings as typed.</summary>
+    public IReadOnlyList<WindingDraft> Windings => _windings;
 
-    /// <summary>Conductor diameter in mm as typed.</summary>
-    public string ConductorDiameterText { get; private set; } = "0.5";
-
-    /// <summary>Overall diameter in mm as typed (empty: assume the enamel build).</summary>
-    public string OverallDiameterText { get; private set; } = string.Empty;
+    /// <summary>The operating conditions as typed.</summary>
+    public OperatingDraft Operating { get; } = new();
 
     /// <summary>The latest evaluation, or null while an input is invalid.</summary>
     public PlanEvaluation? Result { get; private set; }
 
+    /// <summary>The plan the latest evaluation was made for.</summary>
+    public TransformerPlan? Plan { get; private set; }
+
     /// <summary>Raised after every recalculation.</summary>
     public event Action? Changed;
 
-    /// <summary>The error text for a field, or null.</summary>
-    public string? ErrorFor(PlanField field) => _errors.TryGetValue(field, out var text) ? text : null;
+    /// <summary>The error text for a field path, or null.</summary>
+    public string? ErrorFor(string path) => _errors.TryGetValue(path, out var text) ? text : null;
 
-    /// <summary>True when any field has an error.</summary>
-    public bool HasErrors => _errors.Count > 0;
+    /// <summary>All field errors.</summary>
+    public IReadOnlyDictionary<string, string> Errors => _errors;
+
+    /// <summary>Wire suggestions for a winding, if asked for.</summary>
+    public WireChoiceReport? SuggestionsFor(int index) => _suggestions.GetValueOrDefault(index);
 
     /// <summary>Selects a catalogue core.</summary>
     public void SelectCore(string? id)
@@ -63,64 +78,109 @@ public sealed class PlanningState
         Recalculate();
     }
 
-    /// <summary>Sets the number of turns as typed.</summary>
-    public void SetTurns(string? text)
+    /// <summary>Changes one winding and recalculates.</summary>
+    public void EditWinding(int index, Action<WindingDraft> edit)
     {
-        TurnsText = text ?? string.Empty;
+        ArgumentNullException.ThrowIfNull(edit);
+        if (index < 0 || index >= _windings.Count)
+        {
+            return;
+        }
+
+        edit(_windings[index]);
+        _suggestions.Remove(index);
         Recalculate();
     }
 
-    /// <summary>Sets the conductor diameter (mm) as typed.</summary>
-    public void SetConductorDiameter(string? text)
+    /// <summary>Changes the operating conditions and recalculates.</summary>
+    public void EditOperating(Action<OperatingDraft> edit)
     {
-        ConductorDiameterText = text ?? string.Empty;
+        ArgumentNullException.ThrowIfNull(edit);
+        edit(Operating);
+        _suggestions.Clear();
         Recalculate();
     }
 
-    /// <summary>Sets the overall diameter (mm) as typed; empty means "assume the enamel build".</summary>
-    public void SetOverallDiameter(string? text)
+    /// <summary>Adds a winding after the last one.</summary>
+    public void AddWinding()
     {
-        OverallDiameterText = text ?? string.Empty;
+        if (_windings.Count >= MaximumWindings)
+        {
+            return;
+        }
+
+        _windings.Add(new WindingDraft { Name = $"winding {_windings.Count + 1}", Turns = "4", ConductorDiameter = "0.4" });
+        _suggestions.Clear();
         Recalculate();
+    }
+
+    /// <summary>Removes a winding (the last one stays).</summary>
+    public void RemoveWinding(int index)
+    {
+        if (_windings.Count <= 1 || index < 0 || index >= _windings.Count)
+        {
+            return;
+        }
+
+        _windings.RemoveAt(index);
+        _suggestions.Clear();
+        Recalculate();
+    }
+
+    /// <summary>Asks the engine's gauge picker for wires for winding <paramref name="index"/>.</summary>
+    public void SuggestWires(int index)
+    {
+        if (Plan?.Operating is null || Result is null || index < 0 || index >= Result.Windings.Count)
+        {
+            return;
+        }
+
+        var current = Result.Windings[index].Electrical?.RmsCurrentA ?? 0;
+        if (current > 0)
+        {
+            _suggestions[index] = WireGaugePicker.ChooseWithReport(Plan, index, Math.Min(current, WireGaugePicker.MaximumCurrentA), Plan.Operating.MaxFrequencyHz);
+        }
+
+        Changed?.Invoke();
+    }
+
+    /// <summary>Uses a suggested wire for winding <paramref name="index"/>.</summary>
+    public void UseSuggestion(int index, WireChoice choice)
+    {
+        ArgumentNullException.ThrowIfNull(choice);
+        EditWinding(index, w =>
+        {
+            w.StandardId = choice.StandardId;
+            w.StrandsInHand = choice.StrandsInHand > 1 ? choice.StrandsInHand.ToString(System.Globalization.CultureInfo.InvariantCulture) : string.Empty;
+        });
+    }
+
+    /// <summary>The plan document for the current inputs (what the API would be sent).</summary>
+    public PlanDocument ToDocument()
+    {
+        var errors = new Dictionary<string, string>(StringComparer.Ordinal);
+        return BuildDocument(errors);
     }
 
     private void Recalculate()
     {
         _errors.Clear();
         Result = null;
-        if (CoreId is null)
-        {
-            _errors[PlanField.Core] = "Pick a core.";
-        }
-
-        var turns = ParseWhole(PlanField.Turns, TurnsText, "Turns");
-        var conductor = ParseNumber(PlanField.ConductorDiameter, ConductorDiameterText, "Conductor diameter", required: true);
-        var overall = ParseNumber(PlanField.OverallDiameter, OverallDiameterText, "Overall diameter", required: false);
+        Plan = null;
+        var document = BuildDocument(_errors);
         if (_errors.Count == 0)
         {
-            var document = new PlanDocument
-            {
-                Core = new PlanCoreDocument { CatalogueId = CoreId },
-                Windings =
-                [
-                    new PlanWindingDocument
-                    {
-                        Name = "winding",
-                        Turns = turns,
-                        Wire = new PlanWireDocument { ConductorDiameterMm = conductor, OverallDiameterMm = overall },
-                    },
-                ],
-            };
             var read = PlanReader.Read(document, _catalogue.Catalogue);
             if (read.IsValid)
             {
+                Plan = read.Plan;
                 Result = PlanEvaluator.Evaluate(read.Plan!);
             }
             else
             {
                 foreach (var error in read.Errors)
                 {
-                    _errors.TryAdd(FieldOf(error), error.Message);
+                    _errors.TryAdd(PageField(error), error.Message);
                 }
             }
         }
@@ -128,64 +188,106 @@ public sealed class PlanningState
         Changed?.Invoke();
     }
 
-    /// <summary>Maps a plan-document field path to the page field that shows it.</summary>
-    public static PlanField FieldOf(FieldError error)
+    /// <summary>The page field that shows an error: the path itself, or the nearest field the page has.</summary>
+    private static string PageField(FieldError error) => error.Field switch
     {
-        ArgumentNullException.ThrowIfNull(error);
-        return FieldOf(error.Field);
-    }
+        var f when f.StartsWith("core", StringComparison.Ordinal) => "core",
+        var f when f.EndsWith(".wire.standardId", StringComparison.Ordinal) => f[..^".standardId".Length] + ".conductorDiameterMm",
+        var f when f.EndsWith(".wire", StringComparison.Ordinal) => f + ".conductorDiameterMm",
+        var f => f,
+    };
 
-    /// <summary>Maps a plan-document field path (as in errors and warnings) to the page field that shows it.</summary>
-    public static PlanField FieldOf(string path)
+    private PlanDocument BuildDocument(Dictionary<string, string> errors)
     {
-        ArgumentNullException.ThrowIfNull(path);
-        return path switch
+        if (CoreId is null)
         {
-            _ when path.EndsWith(".turns", StringComparison.Ordinal) => PlanField.Turns,
-            _ when path.EndsWith(".conductorDiameterMm", StringComparison.Ordinal) => PlanField.ConductorDiameter,
-            _ when path.EndsWith(".overallDiameterMm", StringComparison.Ordinal) => PlanField.OverallDiameter,
-            _ => PlanField.Core,
+            errors["core"] = "Pick a core.";
+        }
+
+        var windings = new List<PlanWindingDocument?>();
+        for (var i = 0; i < _windings.Count; i++)
+        {
+            var draft = _windings[i];
+            var prefix = $"windings[{i}]";
+            var wire = new PlanWireDocument { StrandsInHand = Whole(errors, $"{prefix}.wire.strandsInHand", draft.StrandsInHand, "Wires in hand", required: false) };
+            if (draft.StandardId is not null)
+            {
+                wire.StandardId = draft.StandardId;
+            }
+            else
+            {
+                wire.ConductorDiameterMm = Number(errors, $"{prefix}.wire.conductorDiameterMm", draft.ConductorDiameter, "Conductor diameter", "mm", required: true);
+                wire.OverallDiameterMm = Number(errors, $"{prefix}.wire.overallDiameterMm", draft.OverallDiameter, "Overall diameter", "mm", required: false);
+            }
+
+            windings.Add(new PlanWindingDocument
+            {
+                Name = draft.Name,
+                Turns = Whole(errors, $"{prefix}.turns", draft.Turns, "Turns", required: true),
+                Wire = wire,
+                RmsCurrentA = Number(errors, $"{prefix}.rmsCurrentA", draft.RmsCurrent, "RMS current", "A", required: false),
+            });
+        }
+
+        PlanOperatingDocument? operating = null;
+        if (Operating.Enabled)
+        {
+            operating = new PlanOperatingDocument
+            {
+                MinFrequencyHz = Number(errors, "operating.minFrequencyHz", Operating.MinFrequency, "Lowest frequency", "Hz", required: true),
+                MaxFrequencyHz = Number(errors, "operating.maxFrequencyHz", Operating.MaxFrequency, "Highest frequency", "Hz", required: true),
+                SourceResistanceOhm = Number(errors, "operating.sourceResistanceOhm", Operating.SourceResistance, "Source resistance", "Ω", required: true),
+                LoadResistanceOhm = Number(errors, "operating.loadResistanceOhm", Operating.LoadResistance, "Load resistance", "Ω", required: true),
+                DriveVoltageRms = Number(errors, "operating.driveVoltageRms", Operating.DriveVoltage, "Drive voltage", "V", required: true),
+                Waveform = Operating.Waveform,
+                DutyCycle = Operating.Waveform == "pulse" ? Number(errors, "operating.dutyCycle", Operating.DutyCycle, "Duty cycle", string.Empty, required: true) : null,
+                AmbientTemperatureC = Number(errors, "operating.ambientTemperatureC", Operating.AmbientTemperature, "Ambient temperature", "°C", required: false),
+            };
+        }
+
+        return new PlanDocument
+        {
+            Core = new PlanCoreDocument { CatalogueId = CoreId },
+            Windings = windings,
+            Operating = operating,
         };
     }
 
-    private int? ParseWhole(PlanField field, string text, string label)
+    private static double? Number(Dictionary<string, string> errors, string path, string text, string label, string unit, bool required)
     {
-        var trimmed = text.Trim();
-        if (trimmed.Length == 0)
-        {
-            _errors[field] = $"{label}: required, a whole number from 1 to {PlanReader.MaximumTurns.ToString("N0", CultureInfo.InvariantCulture)}.";
-            return null;
-        }
-
-        if (!int.TryParse(trimmed, NumberStyles.Integer, CultureInfo.InvariantCulture, out var value))
-        {
-            _errors[field] = $"{label}: '{trimmed}' is not a whole number.";
-            return null;
-        }
-
-        return value;
-    }
-
-    private double? ParseNumber(PlanField field, string text, string label, bool required)
-    {
-        var trimmed = text.Trim();
-        if (trimmed.Length == 0)
+        if (string.IsNullOrWhiteSpace(text))
         {
             if (required)
             {
-                _errors[field] = $"{label}: required, a number in millimetres.";
+                errors[path] = $"{label}: required{(unit.Length > 0 ? $", in {unit}" : string.Empty)}.";
             }
 
             return null;
         }
 
-        var normalised = trimmed.Replace(',', '.');
-        if (!double.TryParse(normalised, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) || !double.IsFinite(value))
+        var value = EngineeringNumber.TryParse(text, unit);
+        if (value is null)
         {
-            _errors[field] = $"{label}: '{trimmed}' is not a number.";
-            return null;
+            errors[path] = $"{label}: '{text.Trim()}' is not a number{(unit.Length > 0 ? $" in {unit}" : string.Empty)}.";
         }
 
         return value;
+    }
+
+    private static int? Whole(Dictionary<string, string> errors, string path, string text, string label, bool required)
+    {
+        var value = Number(errors, path, text, label, string.Empty, required);
+        if (value is null)
+        {
+            return null;
+        }
+
+        if (value != Math.Floor(value.Value) || Math.Abs(value.Value) > int.MaxValue)
+        {
+            errors[path] = $"{label}: '{text.Trim()}' is not a whole number.";
+            return null;
+        }
+
+        return (int)value.Value;
     }
 }

@@ -7,14 +7,18 @@ namespace Winding.Web.Tests.Components;
 public sealed class PlanPageTests : WindingComponentTestBase
 {
     [Fact]
-    public void PlanPage_FirstRender_ShowsCoreParametersAndInductance()
+    public void PlanPage_FirstRender_ShowsCoreWindingsBandAndOperatingPoint()
     {
         var page = Render<PlanPage>();
 
         Assert.Equal("true", page.Find("#plan-page").GetAttribute("data-interactive"));
         Assert.Contains("H/turn²", page.Find("[data-testid=value-al]").TextContent, StringComparison.Ordinal);
         Assert.Contains("mm", page.Find("[data-testid=value-le]").TextContent, StringComparison.Ordinal);
-        Assert.NotEmpty(page.Find("[data-testid=value-inductance]").TextContent);
+        Assert.NotEmpty(page.Find("[data-testid=value-w0-inductance]").TextContent);
+        Assert.NotEmpty(page.Find("[data-testid=value-w1-rac]").TextContent);
+        Assert.Contains("mT", page.Find("[data-testid=value-flux]").TextContent, StringComparison.Ordinal);
+        Assert.Contains("K", page.Find("[data-testid=value-temperature]").TextContent, StringComparison.Ordinal);
+        Assert.NotEmpty(page.Find("[data-testid=value-magnetizing]").TextContent);
     }
 
     [Fact]
@@ -23,15 +27,14 @@ public sealed class PlanPageTests : WindingComponentTestBase
         var page = Render<PlanPage>();
         var state = Services.GetRequiredService<PlanningState>();
         state.SelectCore("toroid-10x5x4-nizn-850");
-        page.Find("input#turns").Input("10");
-        page.WaitForAssertion(() => Assert.Equal("10", state.TurnsText));
-        var before = page.Find("[data-testid=value-inductance]").TextContent;
+        page.Find("input#windings-0-turns").Input("10");
+        // AL of a 10 × 5 × 4 mm ring at μi 850 is 471.34 nH (IEC 60205; physics-sources.md §2.2): 10 turns → 47.13 µH.
+        page.WaitForAssertion(() => Assert.Equal("47.1 µH", page.Find("[data-testid=value-w0-inductance]").TextContent.Trim()));
 
-        page.Find("input#turns").Input("20");
+        page.Find("input#windings-0-turns").Input("20");
 
-        // AL of a 10 × 5 × 4 mm ring at μi 850 is 471.34 nH (IEC 60205; physics-sources.md §2.2): 20 turns → 188.5 µH.
-        page.WaitForAssertion(() => Assert.Equal("189 µH", page.Find("[data-testid=value-inductance]").TextContent.Trim()));
-        Assert.Equal("47.1 µH", before.Trim());
+        // 20 turns → 188.5 µH.
+        page.WaitForAssertion(() => Assert.Equal("189 µH", page.Find("[data-testid=value-w0-inductance]").TextContent.Trim()));
     }
 
     [Fact]
@@ -39,9 +42,9 @@ public sealed class PlanPageTests : WindingComponentTestBase
     {
         var page = Render<PlanPage>();
 
-        page.Find("input#turns").Input("lots");
+        page.Find("input#windings-0-turns").Input("lots");
 
-        page.WaitForAssertion(() => Assert.Contains("'lots' is not a whole number", page.Markup, StringComparison.Ordinal));
+        page.WaitForAssertion(() => Assert.Contains("Turns: 'lots' is not a number", page.Markup, StringComparison.Ordinal));
         Assert.NotNull(page.Find("[data-testid=no-result]"));
     }
 
@@ -51,10 +54,36 @@ public sealed class PlanPageTests : WindingComponentTestBase
         var page = Render<PlanPage>();
         Services.GetRequiredService<PlanningState>().SelectCore("toroid-10x5x4-nizn-850");
 
-        page.Find("input#conductor-diameter").Input("1.0");
-        page.Find("input#turns").Input("500");
+        page.Find("input#windings-0-conductor").Input("1.0");
+        page.Find("input#windings-0-turns").Input("500");
 
         page.WaitForAssertion(() => Assert.NotNull(page.Find("[data-code=wire-does-not-fit]")));
         Assert.Contains("does not fit", page.Find("[data-code=wire-does-not-fit]").TextContent, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void PlanPage_AddAndRemoveWinding_ChangesTheResults()
+    {
+        var page = Render<PlanPage>();
+
+        page.Find("[data-testid=add-winding] button, button[data-testid=add-winding]").Click();
+
+        page.WaitForAssertion(() => Assert.NotNull(page.Find("[data-testid=value-w2-inductance]")));
+        page.Find("button[data-testid=windings-2-remove]").Click();
+        page.WaitForAssertion(() => Assert.Empty(page.FindAll("[data-testid=value-w2-inductance]")));
+    }
+
+    [Fact]
+    public void PlanPage_SuggestWire_ListsChoicesAndUsingOneSetsTheWire()
+    {
+        var page = Render<PlanPage>();
+        var state = Services.GetRequiredService<PlanningState>();
+
+        page.Find("button[data-testid=windings-0-suggest]").Click();
+
+        page.WaitForAssertion(() => Assert.NotNull(page.Find("[data-testid=windings-0-suggestions]")));
+        page.Find("[data-testid=windings-0-suggestions] button").Click();
+        page.WaitForAssertion(() => Assert.NotNull(state.Windings[0].StandardId));
+        Assert.NotNull(state.Result);
     }
 }

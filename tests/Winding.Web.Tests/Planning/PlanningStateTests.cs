@@ -8,11 +8,11 @@ public sealed class PlanningStateTests : WindingComponentTestBase
     private PlanningState State => Services.GetRequiredService<PlanningState>();
 
     [Fact]
-    public void SetConductorDiameter_DecimalComma_IsAccepted()
+    public void EditWinding_DecimalComma_IsAccepted()
     {
-        State.SetConductorDiameter("0,4");
+        State.EditWinding(0, w => w.ConductorDiameter = "0,4");
 
-        Assert.Null(State.ErrorFor(PlanField.ConductorDiameter));
+        Assert.Null(State.ErrorFor("windings[0].wire.conductorDiameterMm"));
         Assert.NotNull(State.Result);
         Assert.Equal(0.4, State.Result!.Windings[0].Wire.StrandDiameter.Millimetres, 9);
     }
@@ -22,21 +22,25 @@ public sealed class PlanningStateTests : WindingComponentTestBase
     [InlineData("-3")]
     [InlineData("1e400")]
     [InlineData("NaN")]
-    public void SetConductorDiameter_Invalid_GivesAFieldErrorAndNoResult(string text)
+    [InlineData("0.5 kg")]
+    public void EditWinding_InvalidConductor_GivesAFieldErrorAndNoResult(string text)
     {
-        State.SetConductorDiameter(text);
+        State.EditWinding(0, w => w.ConductorDiameter = text);
 
-        Assert.NotNull(State.ErrorFor(PlanField.ConductorDiameter));
+        Assert.NotNull(State.ErrorFor("windings[0].wire.conductorDiameterMm"));
         Assert.Null(State.Result);
     }
 
     [Fact]
-    public void SetOverallDiameter_SmallerThanConductor_IsAnErrorAtThatField()
+    public void EditWinding_OverallSmallerThanConductor_IsAnErrorAtThatField()
     {
-        State.SetConductorDiameter("0.5");
-        State.SetOverallDiameter("0.3");
+        State.EditWinding(0, w =>
+        {
+            w.ConductorDiameter = "0.5";
+            w.OverallDiameter = "0.3";
+        });
 
-        Assert.Contains("cannot be smaller", State.ErrorFor(PlanField.OverallDiameter), StringComparison.Ordinal);
+        Assert.Contains("cannot be smaller", State.ErrorFor("windings[0].wire.overallDiameterMm"), StringComparison.Ordinal);
     }
 
     [Fact]
@@ -44,6 +48,36 @@ public sealed class PlanningStateTests : WindingComponentTestBase
     {
         State.SelectCore("no-such-core");
 
-        Assert.NotNull(State.ErrorFor(PlanField.Core));
+        Assert.NotNull(State.ErrorFor("core"));
+    }
+
+    [Theory]
+    [InlineData("1.8 MHz", 1.8e6)]
+    [InlineData("1.8M", 1.8e6)]
+    [InlineData("1800k", 1.8e6)]
+    [InlineData("1,8 MHz", 1.8e6)]
+    [InlineData("1800000", 1.8e6)]
+    public void EditOperating_EngineeringNotation_IsUnderstood(string text, double hz)
+    {
+        State.EditOperating(o => o.MinFrequency = text);
+
+        Assert.Equal(hz, State.Result!.Magnetizing!.FrequencyHz, 1e-6);
+    }
+
+    [Fact]
+    public void EditOperating_HighestBelowLowest_IsAnErrorAtTheHighestFrequency()
+    {
+        State.EditOperating(o => o.MaxFrequency = "1 MHz");
+
+        Assert.NotNull(State.ErrorFor("operating.maxFrequencyHz"));
+    }
+
+    [Fact]
+    public void EditOperating_Disabled_LeavesOutTheOperatingPoint()
+    {
+        State.EditOperating(o => o.Enabled = false);
+
+        Assert.NotNull(State.Result);
+        Assert.Null(State.Result!.Operating);
     }
 }

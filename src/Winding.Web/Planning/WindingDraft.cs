@@ -1,0 +1,26 @@
+namespace Winding.Web.Planning;
+
+/// <summary>One winding as the user typed it (texts, not yet validated).</summary>
+public sealed class WindingDraft
+{
+    /// <summary>Name.</summary>
+    public string Name { get; set; } = string.Empty;
+
+    /// <summary>Turns as typed.</summary>
+    public string Turns { get; set; } = string.Empty;
+
+    /// <summary>A standard wire id chosen from the suggestions, or null for a custom wire.</summary>
+    public string? StandardId { get; set; }
+
+    /// <summary>Custom wire: conductor diameter in mm as typed.</summary>
+    public string ConductorDiameter { get; set; } = string.Empty;
+
+    /// <summary>Custom wire: overall diameter in mm as typed (empty: assume the enamel build).</summary>
+    public string OverallDiameter { get; set; } = string.Empty;
+
+    /// <summary>Wires in hand as typed (empty: 1).</summary>
+    public string StrandsInHand { get; set; } = string.Empty;
+
+    /// <summary>RMS current in A as typed (empty: derived from drive and load).</summary>
+    public string RmsCurrent { get; set; } = string.Empty;
+}
