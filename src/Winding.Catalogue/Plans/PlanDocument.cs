@@ -77,6 +77,9 @@ public sealed class PlanWindingDocument
     /// <summary>Turn counts where taps are brought out.</summary>
     public List<int>? Taps { get; set; }
 
+    /// <summary>An inductance this winding should reach, H: the results then give the turns that reach it.</summary>
+    public double? TargetInductanceH { get; set; }
+
     /// <summary>RMS current in this winding, A (optional; otherwise derived from drive and load for the first and last winding).</summary>
     public double? RmsCurrentA { get; set; }
 }

@@ -180,9 +180,14 @@ public static class PlanReader
                 v.Range($"{prefix}.rmsCurrentA", document.RmsCurrentA, 0, 1000, "A");
             }
 
+            if (document.TargetInductanceH is not null)
+            {
+                v.Range($"{prefix}.targetInductanceH", document.TargetInductanceH, 1e-12, 1e3, "H", minimumExclusive: true);
+            }
+
             if (v.Errors.Count == before && turns is not null && wire is not null && placement is not null)
             {
-                windings.Add(WindingSpec.Create(name, turns.Value, wire, placement, wrap, taps, document.RmsCurrentA));
+                windings.Add(WindingSpec.Create(name, turns.Value, wire, placement, wrap, taps, document.RmsCurrentA, document.TargetInductanceH));
             }
         }
 

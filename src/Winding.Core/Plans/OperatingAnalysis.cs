@@ -81,7 +81,7 @@ public static class OperatingAnalysis
         var seenOhm = Math.Max(op.SourceResistanceOhm, reflectedLoadOhm);
         var alAtFmin = InductanceFactor.FromHenriesPerTurnSquared(PhysicalConstants.VacuumPermeabilityHPerM * muPrime / effective.CoreFactorC1PerM);
         var turnsNeeded = TurnsSolver.ForReactance(alAtFmin, op.MinFrequencyHz, seenOhm, op.ReactanceFactor, material.AlTolerance);
-        var branch = new MagnetizingBranch(op.MinFrequencyHz, magnetizing.SeriesInductanceH, magnetizing.SeriesReactanceOhm, seenOhm, op.ReactanceFactor, turnsNeeded, extrapolated);
+        var branch = new MagnetizingBranch(op.MinFrequencyHz, magnetizing.SeriesInductanceH, magnetizing.SeriesReactanceOhm, magnetizing.SeriesResistanceOhm, magnetizing.ParallelResistanceOhm, seenOhm, op.ReactanceFactor, turnsNeeded, extrapolated);
 
         // Currents and windings at f_max.
         var magnetizingCurrentA = op.DriveVoltageRms / Math.Max(magnetizing.MagnitudeOhm, 1e-12);

@@ -31,7 +31,7 @@ public static class PlanEvaluator
             var lengthM = plan.Allowance.LengthToCutM(spec.Turns, fit.MeanTurnLengthM);
             var rdcOhm = spec.Wire.Metal.DcResistanceOhm(lengthM, spec.Wire.ConductorAreaM2);
             var fill = spec.Turns * spec.Wire.ConductorAreaM2 / shape.WindowAreaM2;
-            windings.Add(new WindingEvaluation(spec.Name, spec.Turns, spec.Wire, al.InductanceH(spec.Turns), fit, fill, woundM, lengthM, rdcOhm, spec.Taps, null));
+            windings.Add(new WindingEvaluation(spec.Name, spec.Turns, spec.Wire, al.InductanceH(spec.Turns), fit, fill, woundM, lengthM, rdcOhm, spec.Taps, TurnsFor(spec, al, plan.Core.Material.AlTolerance), null));
 
             if (spec.Wire.OverallDiameterAssumed)
             {
@@ -84,6 +84,11 @@ public static class PlanEvaluator
         var ordered = warnings.OrderByDescending(w => w.Severity).ToList();
         return new PlanEvaluation(core, windings, turnsRatio, impedanceRatio, magnetizing, point, ordered);
     }
+
+    private static (int, int)? TurnsFor(WindingSpec spec, InductanceFactor al, double tolerance) =>
+        spec.TargetInductanceH is { } target
+            ? (TurnsSolver.ForInductance(al, target, 0), TurnsSolver.ForInductance(al, target, Math.Min(tolerance, 0.9)))
+            : null;
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

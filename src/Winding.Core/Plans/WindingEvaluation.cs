@@ -14,6 +14,8 @@ namespace Winding.Core.Plans;
 /// <param name="WireLengthM">Length to cut: wound length with margin, plus leads, m.</param>
 /// <param name="DcResistanceOhm">DC resistance of the whole length to cut at 20 °C, Ω.</param>
 /// <param name="Taps">Turn counts where taps are brought out.</param>
+/// <param name="TurnsForTarget">Turns for the winding's target inductance: nominal AL and the low end of its tolerance
+/// (null when no target was asked for).</param>
 /// <param name="Electrical">AC resistance, skin depth, current and current density at the operating point (null without
 /// operating conditions).</param>
 public sealed record WindingEvaluation(
@@ -27,4 +29,5 @@ public sealed record WindingEvaluation(
     double WireLengthM,
     double DcResistanceOhm,
     IReadOnlyList<int> Taps,
+    (int Nominal, int Guaranteed)? TurnsForTarget,
     WindingElectrical? Electrical);

@@ -6,9 +6,10 @@ namespace Winding.Core.Plans;
 /// <summary>One winding of a plan, in winding order: name, turns, wire, placement, the wrap under it and its taps.</summary>
 public sealed record WindingSpec
 {
-    private WindingSpec(string name, int turns, WindingWire wire, WindingPlacement placement, InsulationWrap? wrap, IReadOnlyList<int> taps, double? rmsCurrentA)
+    private WindingSpec(string name, int turns, WindingWire wire, WindingPlacement placement, InsulationWrap? wrap, IReadOnlyList<int> taps, double? rmsCurrentA, double? targetInductanceH)
     {
         RmsCurrentA = rmsCurrentA;
+        TargetInductanceH = targetInductanceH;
         Name = name;
         Turns = turns;
         Wire = wire;
@@ -38,9 +39,12 @@ public sealed record WindingSpec
     /// <summary>RMS current stated for this winding, A; null to derive it from the drive and the load.</summary>
     public double? RmsCurrentA { get; }
 
+    /// <summary>An inductance this winding should reach, H, for the turns solver; null when none is asked for.</summary>
+    public double? TargetInductanceH { get; }
+
     /// <summary>Creates a winding.</summary>
     /// <exception cref="ArgumentOutOfRangeException">Fewer than one turn, a tap outside 1 … turns − 1, or a negative current.</exception>
-    public static WindingSpec Create(string name, int turns, WindingWire wire, WindingPlacement? placement = null, InsulationWrap? wrap = null, IReadOnlyList<int>? taps = null, double? rmsCurrentA = null)
+    public static WindingSpec Create(string name, int turns, WindingWire wire, WindingPlacement? placement = null, InsulationWrap? wrap = null, IReadOnlyList<int>? taps = null, double? rmsCurrentA = null, double? targetInductanceH = null)
     {
         ArgumentNullException.ThrowIfNull(name);
         ArgumentNullException.ThrowIfNull(wire);
@@ -56,6 +60,11 @@ public sealed record WindingSpec
             throw new ArgumentOutOfRangeException(nameof(rmsCurrentA), rmsCurrentA, "The RMS current must be finite and at least 0.");
         }
 
-        return new WindingSpec(name, turns, wire, placement ?? WindingPlacement.Spread, wrap, sortedTaps, rmsCurrentA);
+        if (targetInductanceH is { } target && !(target > 0 && double.IsFinite(target)))
+        {
+            throw new ArgumentOutOfRangeException(nameof(targetInductanceH), targetInductanceH, "The target inductance must be finite and positive.");
+        }
+
+        return new WindingSpec(name, turns, wire, placement ?? WindingPlacement.Spread, wrap, sortedTaps, rmsCurrentA, targetInductanceH);
     }
 }

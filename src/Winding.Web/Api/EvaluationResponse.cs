@@ -22,10 +22,12 @@ public sealed record EvaluationResponse(
 /// <summary>The primary's reactance at the bottom of the band against the rule X ≥ k·Z.</summary>
 /// <param name="FrequencyHz">minFrequencyHz.</param>
 /// <param name="ReactanceOhm">2π·f·L_m, Ω.</param>
+/// <param name="SeriesLossResistanceOhm">Core-loss resistance in series with the magnetising inductance at minFrequencyHz, Ω.</param>
+/// <param name="ParallelLossResistanceOhm">The same loss as a resistance across the primary, Ω (null without μ″).</param>
 /// <param name="ImpedanceSeenOhm">The larger of the source resistance and the reflected load, Ω.</param>
 /// <param name="ReactanceFactor">k.</param>
 /// <param name="PrimaryTurnsNeeded">Primary turns meeting the rule at the low end of the AL tolerance.</param>
-public sealed record MagnetizingResponse(double FrequencyHz, double ReactanceOhm, double ImpedanceSeenOhm, double ReactanceFactor, int PrimaryTurnsNeeded);
+public sealed record MagnetizingResponse(double FrequencyHz, double ReactanceOhm, double SeriesLossResistanceOhm, double? ParallelLossResistanceOhm, double ImpedanceSeenOhm, double ReactanceFactor, int PrimaryTurnsNeeded);
 
 /// <summary>The operating point at the worst case.</summary>
 /// <param name="PeakFluxDensityT">B̂ at minFrequencyHz, T.</param>
@@ -88,6 +90,7 @@ public sealed record CoreResponse(double EffectiveLengthM, double EffectiveAreaM
 /// <param name="RmsCurrentA">RMS current, A (stated or derived).</param>
 /// <param name="CurrentDensityAPerM2">RMS current over the copper cross-section, A/m².</param>
 /// <param name="CopperLossW">I²·Rac, W.</param>
+/// <param name="TurnsForTargetInductance">Turns for the winding's targetInductanceH with the nominal AL and at the low end of its tolerance (null without a target).</param>
 public sealed record WindingResponse(
     string Name,
     int Turns,
@@ -115,7 +118,13 @@ public sealed record WindingResponse(
     double? SkinDepthRatio,
     double? RmsCurrentA,
     double? CurrentDensityAPerM2,
-    double? CopperLossW);
+    double? CopperLossW,
+    TurnsForTargetResponse? TurnsForTargetInductance);
+
+/// <summary>Turns that reach a target inductance.</summary>
+/// <param name="Nominal">With the nominal AL: ⌈√(L/AL)⌉.</param>
+/// <param name="Guaranteed">At the low end of the AL tolerance: ⌈√(L/(AL·(1 − t)))⌉.</param>
+public sealed record TurnsForTargetResponse(int Nominal, int Guaranteed);
 
 /// <summary>The wire of a winding as the engine understood it.</summary>
 /// <param name="Description">Plain description.</param>

@@ -57,11 +57,12 @@ public static class EvaluationResponseMapper
                 w.Electrical?.AcFactor.SkinDepthRatio,
                 w.Electrical?.RmsCurrentA,
                 w.Electrical?.CurrentDensityAPerM2,
-                w.Electrical?.CopperLossW))],
+                w.Electrical?.CopperLossW,
+                w.TurnsForTarget is { } t ? new TurnsForTargetResponse(t.Nominal, t.Guaranteed) : null))],
             evaluation.TurnsRatio,
             evaluation.ImpedanceRatio,
             evaluation.Magnetizing?.InductanceH,
-            evaluation.Magnetizing is { } m ? new MagnetizingResponse(m.FrequencyHz, m.ReactanceOhm, m.ImpedanceSeenOhm, m.ReactanceFactor, m.PrimaryTurnsNeeded) : null,
+            evaluation.Magnetizing is { } m ? new MagnetizingResponse(m.FrequencyHz, m.ReactanceOhm, m.SeriesLossResistanceOhm, m.ParallelLossResistanceOhm, m.ImpedanceSeenOhm, m.ReactanceFactor, m.PrimaryTurnsNeeded) : null,
             evaluation.Operating is { } p
                 ? new OperatingPointResponse(p.PeakFluxDensityT, p.SaturationFluxDensityT, p.SaturationMargin, p.CoreLossW, p.CoreLossMethod, p.CopperLossW, p.CopperLossDcW, p.TemperatureRiseK, p.HotTemperatureC, p.SurfaceAreaM2)
                 : null,
