@@ -10,11 +10,12 @@ using Winding.Core.Wire;
 
 namespace Winding.Benchmarks;
 
-/// <summary>How long one plan takes: the engine alone, and validation of the request document plus the engine.</summary>
+/// <summary>How long one plan takes: the engine alone (without and with the operating point), the wire picker for one winding, and validation of the request document plus the engine.</summary>
 [MemoryDiagnoser]
 public class EvaluateBenchmarks
 {
     private TransformerPlan _plan = default!;
+    private TransformerPlan _operatingPlan = default!;
     private PlanDocument _document = default!;
 
     [GlobalSetup]
@@ -30,6 +31,19 @@ public class EvaluateBenchmarks
             ],
             new OperatingConditions(1.8e6, 30e6, 50, 450, 10),
             WireLengthAllowance.Default);
+        var catalogue = CatalogueLoader.Load(Path.Combine(AppContext.BaseDirectory, "cores"));
+        _operatingPlan = PlanReader.Read(
+            new PlanDocument
+            {
+                Core = new PlanCoreDocument { CatalogueId = "toroid-36x23x15-nizn-125" },
+                Windings =
+                [
+                    new PlanWindingDocument { Name = "primary", Turns = 4, Wire = new PlanWireDocument { MetricMm = 0.8 } },
+                    new PlanWindingDocument { Name = "secondary", Turns = 12, Wire = new PlanWireDocument { MetricMm = 0.5 } },
+                ],
+                Operating = new PlanOperatingDocument { MinFrequencyHz = 1.8e6, MaxFrequencyHz = 30e6, SourceResistanceOhm = 50, LoadResistanceOhm = 450, DriveVoltageRms = 70 },
+            },
+            catalogue).Plan ?? throw new InvalidOperationException("The benchmark plan is invalid.");
         _document = new PlanDocument
         {
             Core = new PlanCoreDocument { Shape = "toroid", DimensionsMm = new() { OuterDiameter = 36, InnerDiameter = 23, Height = 15 }, InitialPermeability = 125 },
@@ -43,6 +57,12 @@ public class EvaluateBenchmarks
 
     [Benchmark]
     public PlanEvaluation EvaluatePlan() => PlanEvaluator.Evaluate(_plan);
+
+    [Benchmark]
+    public PlanEvaluation EvaluateWithOperatingPoint() => PlanEvaluator.Evaluate(_operatingPlan);
+
+    [Benchmark]
+    public WireChoiceReport WireChoicesForPrimary() => WireGaugePicker.ChooseWithReport(_operatingPlan, 0, 1.4, 30e6);
 
     [Benchmark]
     public PlanEvaluation ValidateAndEvaluate() => PlanEvaluator.Evaluate(PlanReader.Read(_document, CoreCatalogue.Empty).Plan!);

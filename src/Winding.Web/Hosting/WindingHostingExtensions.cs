@@ -34,6 +34,8 @@ public static class WindingHostingExtensions
         services.AddMudServices();
         services.AddProblemDetails();
         services.AddOpenApi();
+        // Numbers are numbers: the API reads plans strictly (no numbers in strings), and the OpenAPI schema says so.
+        services.ConfigureHttpJsonOptions(options => options.SerializerOptions.NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.Strict);
         services.AddSingleton(WindingPaths.FromConfiguration(configuration));
         services.AddSingleton<CatalogueProvider>();
         services.AddSingleton(TimeProvider.System);
