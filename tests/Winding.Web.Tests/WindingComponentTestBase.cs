@@ -15,6 +15,9 @@ public abstract class WindingComponentTestBase : BunitContext, IAsyncLifetime
 {
     protected WindingComponentTestBase()
     {
+        // Inputs are debounced (200 ms) and the first render of a cold test process JIT-compiles MudBlazor; a second
+        // is not enough on a loaded 2-core CI machine. Waits still end as soon as their condition holds.
+        DefaultWaitTimeout = TimeSpan.FromSeconds(10);
         Services.AddMudServices();
         var paths = new WindingPaths(Path.Combine(AppContext.BaseDirectory, "cores"), Path.Combine(Path.GetTempPath(), "winding-tests"));
         Services.AddSingleton(paths);
