@@ -15,6 +15,12 @@ public static class RequiredTools
         "Chromium",
         "apt-get install chromium");
 
+    /// <summary>Debian's ngspice, the reference circuit simulator for the equivalent-circuit cross-checks.</summary>
+    public static string Ngspice() => Require(
+        Environment.GetEnvironmentVariable("WINDING_NGSPICE") is { Length: > 0 } custom ? custom : "/usr/bin/ngspice",
+        "ngspice",
+        "apt-get install ngspice");
+
     private static string Require(string path, string name, string install)
     {
         if (File.Exists(path))

@@ -23,6 +23,54 @@ public sealed class PlanDocument
 
     /// <summary>Lead length and margin for the length to cut (optional; defaults 50 mm per lead, 5 %).</summary>
     public PlanAllowanceDocument? Allowance { get; set; }
+
+    /// <summary>The response sweep (optional; defaults: a decade beyond each band edge, 401 points).</summary>
+    public PlanSweepDocument? Sweep { get; set; }
+
+    /// <summary>Model options.</summary>
+    public PlanOptionsDocument? Options { get; set; }
+
+    /// <summary>Values measured on the built transformer that replace the estimates.</summary>
+    public PlanMeasuredDocument? Measured { get; set; }
+}
+
+/// <summary>The response sweep in a plan document.</summary>
+public sealed class PlanSweepDocument
+{
+    /// <summary>First frequency, Hz.</summary>
+    public double? StartHz { get; set; }
+
+    /// <summary>Last frequency, Hz.</summary>
+    public double? StopHz { get; set; }
+
+    /// <summary>Number of log-spaced points, 2 to 100 001.</summary>
+    public int? Points { get; set; }
+}
+
+/// <summary>Model options in a plan document.</summary>
+public sealed class PlanOptionsDocument
+{
+    /// <summary>
+    /// True: μ = μi with no μ″, core loss as a fixed shunt resistance and winding resistances at the band's centre — a
+    /// plain linear RLC circuit, as the SPICE export writes it.
+    /// </summary>
+    public bool? FrequencyIndependentCore { get; set; }
+}
+
+/// <summary>Measured values in a plan document; each replaces its estimate.</summary>
+public sealed class PlanMeasuredDocument
+{
+    /// <summary>Measured AL of the wound core, nH per turn².</summary>
+    public double? AlNh { get; set; }
+
+    /// <summary>Leakage inductance measured at the primary with the last winding shorted, H.</summary>
+    public double? LeakageInductanceH { get; set; }
+
+    /// <summary>Capacitance measured between the first and the last winding, F.</summary>
+    public double? InterwindingCapacitanceF { get; set; }
+
+    /// <summary>Self-capacitance per winding, F (null entries: not measured).</summary>
+    public List<double?>? SelfCapacitanceF { get; set; }
 }
 
 /// <summary>The core of a plan document.</summary>

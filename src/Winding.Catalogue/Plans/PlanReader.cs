@@ -52,7 +52,22 @@ public static class PlanReader
             return new PlanReadResult(null, v.Errors);
         }
 
-        return new PlanReadResult(new TransformerPlan(document.Name, core, windings, operating, allowance), v.Errors);
+        var sweep = ReadSweep(v, document.Sweep);
+        var measured = ReadMeasured(v, document.Measured, windings.Count);
+        if (!v.IsValid || sweep is null || measured is null)
+        {
+            return new PlanReadResult(null, v.Errors);
+        }
+
+        var measuredCore = measured.Al is { } al ? core with { MeasuredAl = InductanceFactor.FromHenriesPerTurnSquared(al) } : core;
+        return new PlanReadResult(
+            new TransformerPlan(document.Name, measuredCore, windings, operating, allowance)
+            {
+                Sweep = sweep,
+                FrequencyIndependentCore = document.Options?.FrequencyIndependentCore ?? false,
+                Measured = measured,
+            },
+            v.Errors);
     }
 
     private static PlanCore? ReadCore(FieldValidator v, PlanCoreDocument? document, CoreCatalogue catalogue)
@@ -293,6 +308,56 @@ public static class PlanReader
         }
 
         return thickness is null || permittivity is null ? null : InsulationWrap.Create(document.Material, Length.FromMillimetres(thickness.Value), permittivity.Value);
+    }
+
+    private static SweepSettings? ReadSweep(FieldValidator v, PlanSweepDocument? document)
+    {
+        if (document is null)
+        {
+            return SweepSettings.Default;
+        }
+
+        var start = document.StartHz is null ? null : v.Range("sweep.startHz", document.StartHz, 1e-3, 1e12, "Hz");
+        var stop = document.StopHz is null ? null : v.Range("sweep.stopHz", document.StopHz, 1e-3, 1e12, "Hz");
+        var points = document.Points is null ? SweepSettings.DefaultPoints : v.WholeRange("sweep.points", document.Points, 3, Core.Response.FrequencySweep.MaximumPoints, "points");
+        if ((document.StartHz is not null && start is null) || (document.StopHz is not null && stop is null) || points is null)
+        {
+            return null;
+        }
+
+        if (start is not null && stop is not null && stop <= start)
+        {
+            v.Add("sweep.stopHz", "The sweep must stop above where it starts.");
+            return null;
+        }
+
+        return new SweepSettings(start, stop, points.Value);
+    }
+
+    private static MeasuredValues? ReadMeasured(FieldValidator v, PlanMeasuredDocument? document, int windingCount)
+    {
+        if (document is null)
+        {
+            return MeasuredValues.None;
+        }
+
+        var before = v.Errors.Count;
+        var al = document.AlNh is null ? null : v.Range("measured.alNh", document.AlNh, 0.01, 1e7, "nH", minimumExclusive: true);
+        var leakage = document.LeakageInductanceH is null ? null : v.Range("measured.leakageInductanceH", document.LeakageInductanceH, 0, 10, "H");
+        var interwinding = document.InterwindingCapacitanceF is null ? null : v.Range("measured.interwindingCapacitanceF", document.InterwindingCapacitanceF, 0, 1e-6, "F");
+        var selfCapacitances = new List<double?>();
+        var listed = document.SelfCapacitanceF ?? [];
+        if (listed.Count > windingCount)
+        {
+            v.Add("measured.selfCapacitanceF", $"One value per winding at most ({windingCount}).");
+        }
+
+        for (var i = 0; i < Math.Min(listed.Count, windingCount); i++)
+        {
+            selfCapacitances.Add(listed[i] is null ? null : v.Range($"measured.selfCapacitanceF[{i}]", listed[i], 0, 1e-6, "F"));
+        }
+
+        return v.Errors.Count != before ? null : new MeasuredValues(al * 1e-9, leakage, interwinding, selfCapacitances);
     }
 
     private static WireLengthAllowance? ReadAllowance(FieldValidator v, PlanAllowanceDocument? document)

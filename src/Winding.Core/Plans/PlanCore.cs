@@ -10,6 +10,9 @@ namespace Winding.Core.Plans;
 /// <param name="Material">The core material.</param>
 public sealed record PlanCore(CoreShape Shape, int StackCount, MagneticMaterial Material)
 {
+    /// <summary>A measured AL of the wound core; when set it replaces the computed one everywhere.</summary>
+    public InductanceFactor? MeasuredAl { get; init; }
+
     /// <summary>The stacked shape that the windings go around.</summary>
     public CoreShape WoundGeometry => Shape.Stacked(StackCount);
 
@@ -31,7 +34,7 @@ public sealed record PlanCore(CoreShape Shape, int StackCount, MagneticMaterial 
     /// <summary>
     /// The complex relative permeability of the wound core at a frequency, μ′ − jμ″, from the material's table. With an
     /// air gap g the gapped-core formula is applied to the complex value, μe = μ / (1 + μ·g/le) (Snelling 1988, ch. 2).
-    /// A bobbin core with an entered AL scales the material's curve by AL·C1/(μ0·μi).
+    /// A bobbin core with an entered AL, or any core with a measured AL, scales the material's curve by AL·C1/(μ0·μi).
     /// </summary>
     /// <param name="frequencyHz">Frequency, Hz.</param>
     /// <returns>μ′, μ″ of the wound core and whether the table had to be extrapolated.</returns>
@@ -40,7 +43,12 @@ public sealed record PlanCore(CoreShape Shape, int StackCount, MagneticMaterial 
         var point = Material.Permeability.At(frequencyHz);
         var mu = new System.Numerics.Complex(point.MuPrime, -point.MuDoublePrime);
         var shape = WoundGeometry;
-        if (shape is BobbinCore { EnteredAl: { } entered })
+        if (MeasuredAl is { } measured)
+        {
+            // A measured AL already contains any gap: scale the material's curve so that μ(low f) gives that AL.
+            mu *= measured.HenriesPerTurnSquared * shape.EffectiveParameters().CoreFactorC1PerM / (PhysicalConstants.VacuumPermeabilityHPerM * Material.InitialPermeability);
+        }
+        else if (shape is BobbinCore { EnteredAl: { } entered })
         {
             var scale = entered.HenriesPerTurnSquared * shape.EffectiveParameters().CoreFactorC1PerM / (PhysicalConstants.VacuumPermeabilityHPerM * Material.InitialPermeability);
             mu *= scale;
@@ -53,9 +61,9 @@ public sealed record PlanCore(CoreShape Shape, int StackCount, MagneticMaterial 
         return (mu.Real, -mu.Imaginary, point.IsExtrapolated);
     }
 
-    /// <summary>AL of the wound core: an entered AL (bobbin cores) or μ0·μe/C1 (IEC 60205; Snelling 1988).</summary>
+    /// <summary>AL of the wound core: a measured AL, an entered AL (bobbin cores) or μ0·μe/C1 (IEC 60205; Snelling 1988).</summary>
     public InductanceFactor InductanceFactor =>
-        WoundGeometry is BobbinCore { EnteredAl: { } entered }
+        MeasuredAl ?? (WoundGeometry is BobbinCore { EnteredAl: { } entered }
             ? entered
-            : InductanceFactor.FromPermeability(EffectivePermeability, WoundGeometry.EffectiveParameters());
+            : InductanceFactor.FromPermeability(EffectivePermeability, WoundGeometry.EffectiveParameters()));
 }

@@ -7,6 +7,8 @@ namespace Winding.Core.Plans;
 /// <param name="ImpedanceRatio">The square of the turns ratio; null with a single winding.</param>
 /// <param name="Magnetizing">The primary's magnetising inductance and the reactance rule at f_min (null without operating conditions).</param>
 /// <param name="Operating">Flux, losses and temperature (null without operating conditions).</param>
+/// <param name="Parasitics">Leakage inductance and capacitances.</param>
+/// <param name="Response">The equivalent circuit and its frequency response (null without operating conditions).</param>
 /// <param name="Warnings">Findings, most severe first.</param>
 public sealed record PlanEvaluation(
     CoreEvaluation Core,
@@ -15,4 +17,6 @@ public sealed record PlanEvaluation(
     double? ImpedanceRatio,
     MagnetizingBranch? Magnetizing,
     OperatingPoint? Operating,
+    ParasiticsEvaluation Parasitics,
+    ResponseEvaluation? Response,
     IReadOnlyList<PlanWarning> Warnings);

@@ -73,6 +73,9 @@ public static class PlanEvaluator
             }
         }
 
+        var parasitics = ParasiticEstimator.Estimate(plan, fits);
+        ResponseEvaluation? response = plan.Operating is not null ? ResponseAnalysis.Analyse(plan, parasitics, windings, warnings) : null;
+
         double? turnsRatio = null;
         double? impedanceRatio = null;
         if (windings.Count >= 2)
@@ -82,7 +85,7 @@ public static class PlanEvaluator
         }
 
         var ordered = warnings.OrderByDescending(w => w.Severity).ToList();
-        return new PlanEvaluation(core, windings, turnsRatio, impedanceRatio, magnetizing, point, ordered);
+        return new PlanEvaluation(core, windings, turnsRatio, impedanceRatio, magnetizing, point, parasitics, response, ordered);
     }
 
     private static (int, int)? TurnsFor(WindingSpec spec, InductanceFactor al, double tolerance) =>

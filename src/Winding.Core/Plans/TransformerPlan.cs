@@ -13,4 +13,18 @@ public sealed record TransformerPlan(
     PlanCore Core,
     IReadOnlyList<WindingSpec> Windings,
     OperatingConditions? Operating,
-    WireLengthAllowance Allowance);
+    WireLengthAllowance Allowance)
+{
+    /// <summary>The response sweep (used with operating conditions).</summary>
+    public SweepSettings Sweep { get; init; } = SweepSettings.Default;
+
+    /// <summary>
+    /// When true the core is modelled with μ = μi and no μ″, its loss as a fixed shunt resistance, and the winding
+    /// resistances at the band's geometric centre, so the equivalent circuit is a plain linear RLC circuit (the form the
+    /// SPICE export writes).
+    /// </summary>
+    public bool FrequencyIndependentCore { get; init; }
+
+    /// <summary>Measured values that replace the estimates.</summary>
+    public MeasuredValues Measured { get; init; } = MeasuredValues.None;
+}

@@ -50,4 +50,13 @@ public static class WarningCodes
 
     /// <summary>Steinmetz parameters were used outside their fitted range.</summary>
     public const string SteinmetzOutOfRange = "steinmetz-out-of-range";
+
+    /// <summary>A 1 dB or 3 dB edge of the response lies inside the requested band.</summary>
+    public const string BandEdgeInsideBand = "band-edge-inside-band";
+
+    /// <summary>A self-resonance lies inside the band.</summary>
+    public const string SelfResonanceInBand = "self-resonance-in-band";
+
+    /// <summary>The return loss at the primary is worse than the limit somewhere in the band.</summary>
+    public const string PoorReturnLoss = "poor-return-loss";
 }

@@ -8,6 +8,14 @@ namespace Winding.Web.Api;
 /// <param name="MagnetizingInductanceH">The primary's magnetising inductance at minFrequencyHz, from μ′(f), H (null without operating conditions).</param>
 /// <param name="Magnetizing">The reactance rule at minFrequencyHz (null without operating conditions).</param>
 /// <param name="OperatingPoint">Flux, losses and temperature (null without operating conditions).</param>
+/// <param name="LeakageInductanceH">Leakage inductance between the first and the last winding, referred to the primary, H (an estimate unless measured).</param>
+/// <param name="InterwindingCapacitanceF">Capacitance between the first and the last winding, F (an estimate unless measured).</param>
+/// <param name="Parasitics">How the leakage and capacitances were found, and which values are measured.</param>
+/// <param name="EquivalentCircuit">Element name → value of the equivalent circuit referred to the primary (RS, LM, RCORE, C1, RSERIES, LLK, C2, RL; frequency-dependent values at equivalentCircuitFrequencyHz). Null without operating conditions.</param>
+/// <param name="EquivalentCircuitFrequencyHz">The frequency the frequency-dependent element values are given at (the band's geometric centre), Hz.</param>
+/// <param name="Band">Minimum insertion loss and the 1 dB and 3 dB edges (null without operating conditions).</param>
+/// <param name="Sweep">The frequency response (empty without operating conditions).</param>
+/// <param name="Tolerance">The 3 dB edges at AL ± its tolerance and capacitances ± 30 % (null without operating conditions).</param>
 /// <param name="Warnings">Findings, most severe first.</param>
 public sealed record EvaluationResponse(
     CoreResponse Core,
@@ -17,7 +25,52 @@ public sealed record EvaluationResponse(
     double? MagnetizingInductanceH,
     MagnetizingResponse? Magnetizing,
     OperatingPointResponse? OperatingPoint,
+    double LeakageInductanceH,
+    double InterwindingCapacitanceF,
+    ParasiticsResponse Parasitics,
+    IReadOnlyDictionary<string, double>? EquivalentCircuit,
+    double? EquivalentCircuitFrequencyHz,
+    BandResponse? Band,
+    IReadOnlyList<SweepPointResponse> Sweep,
+    ToleranceResponse? Tolerance,
     IReadOnlyList<WarningResponse> Warnings);
+
+/// <summary>How the parasitic elements were found.</summary>
+/// <param name="LeakageMethod">Method and expected accuracy of the leakage inductance.</param>
+/// <param name="InterwindingMethod">Method of the interwinding capacitance.</param>
+/// <param name="TransformerSelfResonanceHz">Parallel resonance seen from the primary, Hz.</param>
+/// <param name="Measured">Which values are measured rather than estimated.</param>
+public sealed record ParasiticsResponse(string LeakageMethod, string InterwindingMethod, double? TransformerSelfResonanceHz, IReadOnlyList<string> Measured);
+
+/// <summary>The pass band.</summary>
+/// <param name="LowerCutoffHz">Lower 3 dB edge (null when below the sweep).</param>
+/// <param name="UpperCutoffHz">Upper 3 dB edge (null when above the sweep).</param>
+/// <param name="Lower1DbHz">Lower 1 dB edge.</param>
+/// <param name="Upper1DbHz">Upper 1 dB edge.</param>
+/// <param name="MinimumInsertionLossDb">Smallest insertion loss, dB.</param>
+public sealed record BandResponse(double? LowerCutoffHz, double? UpperCutoffHz, double? Lower1DbHz, double? Upper1DbHz, double MinimumInsertionLossDb);
+
+/// <summary>One point of the sweep.</summary>
+/// <param name="FrequencyHz">Frequency, Hz.</param>
+/// <param name="InsertionLossDb">Loss against an ideal lossless transformer of the same ratio between the same source and load, dB.</param>
+/// <param name="ReturnLossDb">Return loss at the primary, dB.</param>
+/// <param name="InputImpedanceOhm">Impedance into the primary, Ω.</param>
+public sealed record SweepPointResponse(double FrequencyHz, double InsertionLossDb, double ReturnLossDb, ComplexResponse InputImpedanceOhm);
+
+/// <summary>A complex number.</summary>
+/// <param name="Re">Real part.</param>
+/// <param name="Im">Imaginary part.</param>
+public sealed record ComplexResponse(double Re, double Im);
+
+/// <summary>The spread of the 3 dB edges.</summary>
+/// <param name="LowerCutoffHz">Lower edge range.</param>
+/// <param name="UpperCutoffHz">Upper edge range.</param>
+public sealed record ToleranceResponse(RangeResponse LowerCutoffHz, RangeResponse UpperCutoffHz);
+
+/// <summary>A range; an end is null when the edge left the sweep.</summary>
+/// <param name="Min">Lowest value.</param>
+/// <param name="Max">Highest value.</param>
+public sealed record RangeResponse(double? Min, double? Max);
 
 /// <summary>The primary's reactance at the bottom of the band against the rule X ≥ k·Z.</summary>
 /// <param name="FrequencyHz">minFrequencyHz.</param>
@@ -90,6 +143,8 @@ public sealed record CoreResponse(double EffectiveLengthM, double EffectiveAreaM
 /// <param name="RmsCurrentA">RMS current, A (stated or derived).</param>
 /// <param name="CurrentDensityAPerM2">RMS current over the copper cross-section, A/m².</param>
 /// <param name="CopperLossW">I²·Rac, W.</param>
+/// <param name="SelfCapacitanceF">Self-capacitance of the winding, F (an estimate unless measured).</param>
+/// <param name="SelfResonanceHz">Self-resonant frequency with its own capacitance, Hz (null when the capacitance is 0).</param>
 /// <param name="TurnsForTargetInductance">Turns for the winding's targetInductanceH with the nominal AL and at the low end of its tolerance (null without a target).</param>
 public sealed record WindingResponse(
     string Name,
@@ -119,6 +174,8 @@ public sealed record WindingResponse(
     double? RmsCurrentA,
     double? CurrentDensityAPerM2,
     double? CopperLossW,
+    double SelfCapacitanceF,
+    double? SelfResonanceHz,
     TurnsForTargetResponse? TurnsForTargetInductance);
 
 /// <summary>Turns that reach a target inductance.</summary>

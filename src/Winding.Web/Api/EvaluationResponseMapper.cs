@@ -22,7 +22,7 @@ public static class EvaluationResponseMapper
                 core.InductanceFactor.HenriesPerTurnSquared,
                 core.ShapeName,
                 core.EffectivePermeability),
-            [.. evaluation.Windings.Select(w => new WindingResponse(
+            [.. evaluation.Windings.Select((w, index) => new WindingResponse(
                 w.Name,
                 w.Turns,
                 w.InductanceH,
@@ -58,6 +58,8 @@ public static class EvaluationResponseMapper
                 w.Electrical?.RmsCurrentA,
                 w.Electrical?.CurrentDensityAPerM2,
                 w.Electrical?.CopperLossW,
+                evaluation.Parasitics.SelfCapacitancesF[index],
+                evaluation.Parasitics.SelfResonancesHz[index],
                 w.TurnsForTarget is { } t ? new TurnsForTargetResponse(t.Nominal, t.Guaranteed) : null))],
             evaluation.TurnsRatio,
             evaluation.ImpedanceRatio,
@@ -65,6 +67,18 @@ public static class EvaluationResponseMapper
             evaluation.Magnetizing is { } m ? new MagnetizingResponse(m.FrequencyHz, m.ReactanceOhm, m.SeriesLossResistanceOhm, m.ParallelLossResistanceOhm, m.ImpedanceSeenOhm, m.ReactanceFactor, m.PrimaryTurnsNeeded) : null,
             evaluation.Operating is { } p
                 ? new OperatingPointResponse(p.PeakFluxDensityT, p.SaturationFluxDensityT, p.SaturationMargin, p.CoreLossW, p.CoreLossMethod, p.CopperLossW, p.CopperLossDcW, p.TemperatureRiseK, p.HotTemperatureC, p.SurfaceAreaM2)
+                : null,
+            evaluation.Parasitics.LeakageInductanceH,
+            evaluation.Parasitics.InterwindingCapacitanceF,
+            new ParasiticsResponse(evaluation.Parasitics.LeakageMethod, evaluation.Parasitics.InterwindingMethod, evaluation.Parasitics.TransformerSelfResonanceHz, evaluation.Parasitics.Measured),
+            evaluation.Response?.Elements,
+            evaluation.Response?.ElementsFrequencyHz,
+            evaluation.Response is { Band: var b } ? new BandResponse(b.LowerCutoffHz, b.UpperCutoffHz, b.Lower1DbHz, b.Upper1DbHz, b.MinimumInsertionLossDb) : null,
+            evaluation.Response is { } r
+                ? [.. r.Sweep.Select(p => new SweepPointResponse(p.FrequencyHz, p.InsertionLossDb, p.ReturnLossDb, new ComplexResponse(p.InputImpedanceOhm.Real, p.InputImpedanceOhm.Imaginary)))]
+                : [],
+            evaluation.Response is { Tolerance: var tol }
+                ? new ToleranceResponse(new RangeResponse(tol.LowerCutoffMinHz, tol.LowerCutoffMaxHz), new RangeResponse(tol.UpperCutoffMinHz, tol.UpperCutoffMaxHz))
                 : null,
             [.. evaluation.Warnings.Select(ToResponse)]);
     }

@@ -6,6 +6,7 @@ using Winding.Catalogue.Validation;
 using Winding.Core.Plans;
 using Winding.Core.Windings;
 using Winding.Core.Wire;
+using Winding.Web.Exports;
 using Winding.Web.Hosting;
 
 namespace Winding.Web.Api;
@@ -26,6 +27,14 @@ public static class WindingApi
             .WithDescription("Takes a plan (core, windings, operating conditions; dimensions and wire diameters in mm, everything else SI) and returns the core's effective parameters and AL, and per winding the inductance, layer fit, length to cut and DC resistance, with warnings. Invalid input answers 400 with application/problem+json whose errors name each bad field.")
             .Accepts<PlanDocument>("application/json")
             .Produces<EvaluationResponse>(StatusCodes.Status200OK, "application/json")
+            .ProducesValidationProblem()
+            .WithMetadata(new RequestSizeLimitAttribute(MaximumBodyBytes));
+        v1.MapPost("/netlist", NetlistAsync)
+            .WithName("Netlist")
+            .WithSummary("SPICE netlist of a plan's equivalent circuit")
+            .WithDescription("Takes a plan with operating conditions and returns an ngspice netlist (text/plain) of its linear equivalent circuit referred to the primary, with a frequency-independent core: node src (1 V AC), RS from src to in, node out across the referred load RL, and an .ac dec analysis over the plan's sweep. Runnable as is with ngspice -b.")
+            .Accepts<PlanDocument>("application/json")
+            .Produces<string>(StatusCodes.Status200OK, "text/plain")
             .ProducesValidationProblem()
             .WithMetadata(new RequestSizeLimitAttribute(MaximumBodyBytes));
         v1.MapPost("/wire-choices", WireChoicesAsync)
@@ -73,6 +82,23 @@ public static class WindingApi
 
         var evaluation = PlanEvaluator.Evaluate(read.Plan!);
         return TypedResults.Json(EvaluationResponseMapper.ToResponse(evaluation), ApiJson.Options);
+    }
+
+    private static async Task<IResult> NetlistAsync(HttpRequest request, CatalogueProvider catalogue, CancellationToken cancellationToken)
+    {
+        var read = await ReadPlanAsync(request, catalogue.Catalogue, cancellationToken);
+        if (!read.IsValid)
+        {
+            return ValidationProblem(read.Errors);
+        }
+
+        if (read.Plan!.Operating is null)
+        {
+            return ValidationProblem([new FieldError("operating", "Required for a netlist: the band sets the analysis range and the source and load resistances.")]);
+        }
+
+        var plan = read.Plan with { FrequencyIndependentCore = true };
+        return TypedResults.Text(SpiceNetlist.Write(plan, PlanEvaluator.Evaluate(plan)), "text/plain; charset=utf-8");
     }
 
     private static async Task<IResult> WireChoicesAsync(HttpRequest request, CatalogueProvider catalogue, CancellationToken cancellationToken)
