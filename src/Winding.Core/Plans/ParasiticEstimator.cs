@@ -12,18 +12,21 @@ namespace Winding.Core.Plans;
 /// estimates.
 /// <list type="bullet">
 /// <item>Overlaid windings: the 1-D MMF formula with b_w the mean circumference of the winding region on a ring core
-/// (π·(ID + OD)/2 times the shared arc), the bobbin breadth on a bobbin, twice the block length on a two-hole core;
-/// a = each winding's build, c = the radial distance between them. Expected within about ±30 % on bobbins, a rougher
+/// (π·(ID + OD)/2 times the shared arc), the bobbin breadth on a bobbin, twice the block length on a two-hole core,
+/// scaled by the larger share of it the two windings' conductors cover; a = each winding's build, c = the radial distance
+/// between them. Expected within about ±30 % on bobbins, a rougher
 /// estimate on rings (wedge-shaped layers) and two-hole cores.</item>
 /// <item>Side-by-side sectors: each sector's air-cored inductance over its own arc (a derived estimate, within a factor
 /// of about 3; measure it).</item>
 /// <item>Bifilar pairs: the two-wire line inductance per metre times the pair's length (±30 %).</item>
-/// <item>Interwinding capacitance: parallel plates over the shared area (mean turn length × shared breadth) through both
+/// <item>Interwinding capacitance: parallel plates over the shared area (mean turn length × shared breadth × the share
+/// each winding's conductors cover) through both
 /// enamels, the wraps between and the air a layer of round wires leaves, (1 − π/4)·r per face (plane geometry); bifilar
 /// pairs as a two-wire line with ε_eff = (1 + ε_enamel)/2 (common practice, no source); sectors that do not overlap only
 /// by the two end-turn pairs where they meet (2·C_tt). All ±30 % at best.</item>
-/// <item>Self-capacitance: one layer by Massarini–Kazimierczuk (1997) C_tt with the ladder to a conductive core (MnZn
-/// class, resistivity ≤ 100 Ω·m) or the neighbour chain otherwise; several layers by the energy method
+/// <item>Self-capacitance: one layer by Massarini–Kazimierczuk (1997) C_tt — or, for turns spread more than 5 % apart,
+/// the two-wire line capacitance in air between neighbours — with the ladder to a conductive core (MnZn class,
+/// resistivity ≤ 100 Ω·m) or the neighbour chain otherwise; several layers by the energy method
 /// (4/3)·C_l·(n − 1)/n² with C_l the layer-to-layer plate capacitance.</item>
 /// </list>
 /// Insulation permittivities (common practice, no source): enamel 3.5, hook-up insulation 3.0, Litz serving 3.5.
@@ -123,8 +126,17 @@ public static class ParasiticEstimator
         var turnLengthM = fit.MeanTurnLengthM;
         if (fit.Layers <= 1)
         {
-            var ctt = Capacitance.TurnToTurnF(rcM, roM, eps, turnLengthM);
             var turns = spec.Turns * spec.Wire.ElementsInHand;
+            var pitchM = fit.TurnsPerLayer.Count > 0 ? fit.BreadthM / (fit.TurnsPerLayer[0] * spec.Wire.ElementsInHand) : 2 * roM;
+            if (pitchM > 1.05 * 2 * roM && turns > 1)
+            {
+                // Turns spread apart: neighbouring turns are a two-wire line in air rather than touching enamel.
+                var spacedF = Capacitance.TwoWireLinePerMetreFPerM(pitchM, 2 * rcM, 1) * turnLengthM;
+                return (Capacitance.SingleLayerSelfF(spacedF, turns, conductive),
+                    "one layer, turns spread apart: neighbouring turns as a two-wire line in air, " + (conductive ? "ladder to a conductive core" : "neighbour chain (an underestimate)"));
+            }
+
+            var ctt = Capacitance.TurnToTurnF(rcM, roM, eps, turnLengthM);
             return (Capacitance.SingleLayerSelfF(ctt, Math.Max(1, turns), conductive),
                 conductive
                     ? "one layer: Massarini–Kazimierczuk turn-to-turn capacitance, ladder to a conductive core (±30 %)"
@@ -164,7 +176,7 @@ public static class ParasiticEstimator
 
         var gapM = Math.Max(0, f2.BuildBelowM - (f1.BuildBelowM + f1.BuildThicknessM));
         var mltM = (f1.MeanTurnLengthM + f2.MeanTurnLengthM) / 2;
-        var breadthM = SharedBreadthM(shape, f1, overlap);
+        var breadthM = SharedBreadthM(shape, f1, overlap) * Math.Max(Coverage(first, f1, shape), Coverage(second, f2, shape));
         // A winding that found no room at all still has at least one wire's build for this estimate.
         var build1 = Math.Max(f1.BuildThicknessM, first.Wire.ElementOverallDiameter.Metres);
         var build2 = Math.Max(f2.BuildThicknessM, second.Wire.ElementOverallDiameter.Metres);
@@ -210,7 +222,7 @@ public static class ParasiticEstimator
         var gapM = Math.Max(0, f2.BuildBelowM - (f1.BuildBelowM + f1.BuildThicknessM) - wrapsM);
         var layers = RoundWireLayerGap(ro1, ro2, rc1, rc2, eps1, eps2, wraps);
         layers.Add(new DielectricLayer(gapM, 1));
-        var areaM2 = (f1.MeanTurnLengthM + f2.MeanTurnLengthM) / 2 * SharedBreadthM(shape, f1, overlap);
+        var areaM2 = (f1.MeanTurnLengthM + f2.MeanTurnLengthM) / 2 * SharedBreadthM(shape, f1, overlap) * Coverage(first, f1, shape) * Coverage(second, f2, shape);
         return (Capacitance.LayeredPlateF(areaM2, layers),
             "parallel plates over the shared area through enamel, wraps and the air between round wires (±30 % at best)");
     }
@@ -245,6 +257,22 @@ public static class ParasiticEstimator
         wire.Kind == WireKind.Litz
             ? Math.Min(wire.ElementOverallDiameter.Metres * 0.95, wire.StrandDiameter.Metres * Math.Sqrt(wire.StrandsPerElement / 0.75))
             : wire.StrandDiameter.Metres;
+
+    /// <summary>
+    /// The share of its breadth a winding's conductors cover, turns × elements in hand × d over the breadth of its first
+    /// layer (1 when the layer is full; 1 on two-hole cores). Facing areas and the leakage breadth are scaled by it, so a
+    /// few turns spread round a large ring do not count as a full plate (our adjustment, common practice, no source).
+    /// </summary>
+    private static double Coverage(WindingSpec spec, WindingFit fit, CoreShape shape)
+    {
+        if (shape is TwoHoleCore || fit.TurnsPerLayer.Count == 0 || fit.BreadthM <= 0)
+        {
+            return 1;
+        }
+
+        var covered = fit.TurnsPerLayer[0] * spec.Wire.ElementsInHand * spec.Wire.ElementOverallDiameter.Metres;
+        return Math.Clamp(covered / fit.BreadthM, 1e-3, 1);
+    }
 
     private static double LayerBreadthM(WindingFit fit, CoreShape shape, double arcDegrees) => shape switch
     {
