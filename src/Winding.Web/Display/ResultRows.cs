@@ -22,6 +22,12 @@ public static class ResultRows
             sections.Add(Band(evaluation));
         }
 
+        sections.Add(Parasitics(evaluation));
+        if (evaluation.Response is { } response)
+        {
+            sections.Add(Response(response));
+        }
+
         if (evaluation.Operating is { } point)
         {
             sections.Add(Operating(point));
@@ -96,6 +102,53 @@ public static class ResultRows
 
         return new ResultSection("band", "Band and ratio", rows);
     }
+
+    private static ResultSection Parasitics(PlanEvaluation evaluation)
+    {
+        var p = evaluation.Parasitics;
+        var measured = p.Measured.Count > 0 ? " (measured: " + string.Join(", ", p.Measured) + ")" : string.Empty;
+        var rows = new List<ResultRow>();
+        if (evaluation.Windings.Count > 1)
+        {
+            rows.Add(new("leakage", "Leakage inductance", EngineeringFormat.Format(p.LeakageInductanceH, "H"), "Referred to the primary: " + p.LeakageMethod + "."));
+            rows.Add(new("interwinding", "Interwinding capacitance", EngineeringFormat.Format(p.InterwindingCapacitanceF, "F"), "Between the first and the last winding: " + p.InterwindingMethod + "."));
+        }
+
+        for (var i = 0; i < evaluation.Windings.Count; i++)
+        {
+            var srf = p.SelfResonancesHz[i] is { } f ? " · resonates at " + EngineeringFormat.Format(f, "Hz") : string.Empty;
+            rows.Add(new($"w{i}-self-capacitance", evaluation.Windings[i].Name + ": self-capacitance", EngineeringFormat.Format(p.SelfCapacitancesF[i], "F") + srf, p.SelfCapacitanceMethods[i] + "; self-resonance 1/(2π·√(L·C))."));
+        }
+
+        if (p.TransformerSelfResonanceHz is { } transformer)
+        {
+            rows.Add(new("transformer-srf", "Resonance seen from the primary", EngineeringFormat.Format(transformer, "Hz"), "Magnetising inductance with all shunt capacitance referred to the primary."));
+        }
+
+        return new ResultSection("parasitics", "Leakage and capacitance" + measured, rows);
+    }
+
+    private static ResultSection Response(ResponseEvaluation r)
+    {
+        var b = r.Band;
+        var t = r.Tolerance;
+        return new ResultSection("response", "Frequency response", [
+            new("min-loss", "Lowest insertion loss", Fixed(b.MinimumInsertionLossDb, 2) + " dB at " + EngineeringFormat.Format(b.MinimumFrequencyHz, "Hz"), "Against an ideal lossless transformer of the same ratio between the same source and load."),
+            new("band-3db", "3 dB band", Edge(b.LowerCutoffHz) + " – " + Edge(b.UpperCutoffHz), "Where the loss is 3 dB worse than its minimum (MathNet Brent root finding on the circuit)."),
+            new("band-1db", "1 dB band", Edge(b.Lower1DbHz) + " – " + Edge(b.Upper1DbHz), "Where the loss is 1 dB worse than its minimum."),
+            new("band-spread", "3 dB edges with tolerance", Edge(t.LowerCutoffMinHz) + "…" + Edge(t.LowerCutoffMaxHz) + " / " + Edge(t.UpperCutoffMinHz) + "…" + Edge(t.UpperCutoffMaxHz), "The lower and upper 3 dB edges over AL ± its tolerance and capacitances ± 30 %."),
+            new("circuit", "Equivalent circuit", string.Join(" · ", r.Elements.Select(e => e.Key + " " + ElementValue(e.Key, e.Value))), "Referred to the primary; frequency-dependent values at " + EngineeringFormat.Format(r.ElementsFrequencyHz, "Hz") + "."),
+        ]);
+    }
+
+    private static string Edge(double? hz) => hz is { } f ? EngineeringFormat.Format(f, "Hz") : "beyond the sweep";
+
+    private static string ElementValue(string name, double value) => name switch
+    {
+        ['L', ..] => EngineeringFormat.Format(value, "H"),
+        ['C', ..] => EngineeringFormat.Format(value, "F"),
+        _ => EngineeringFormat.Format(value, "Ω"),
+    };
 
     private static ResultSection Operating(OperatingPoint p)
     {

@@ -19,6 +19,11 @@ public sealed class PlanPageTests : WindingComponentTestBase
         Assert.Contains("mT", page.Find("[data-testid=value-flux]").TextContent, StringComparison.Ordinal);
         Assert.Contains("K", page.Find("[data-testid=value-temperature]").TextContent, StringComparison.Ordinal);
         Assert.NotEmpty(page.Find("[data-testid=value-magnetizing]").TextContent);
+        Assert.EndsWith("H", page.Find("[data-testid=value-leakage]").TextContent.Trim(), StringComparison.Ordinal);
+        Assert.EndsWith("F", page.Find("[data-testid=value-interwinding]").TextContent.Trim(), StringComparison.Ordinal);
+        Assert.Contains("resonates at", page.Find("[data-testid=value-w0-self-capacitance]").TextContent, StringComparison.Ordinal);
+        Assert.Contains("Hz", page.Find("[data-testid=value-band-3db]").TextContent, StringComparison.Ordinal);
+        Assert.Contains("LLK", page.Find("[data-testid=value-circuit]").TextContent, StringComparison.Ordinal);
     }
 
     [Fact]
