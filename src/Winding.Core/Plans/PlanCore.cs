@@ -38,27 +38,37 @@ public sealed record PlanCore(CoreShape Shape, int StackCount, MagneticMaterial 
     /// </summary>
     /// <param name="frequencyHz">Frequency, Hz.</param>
     /// <returns>μ′, μ″ of the wound core and whether the table had to be extrapolated.</returns>
-    public (double MuPrime, double MuDoublePrime, bool Extrapolated) PermeabilityAt(double frequencyHz)
-    {
-        var point = Material.Permeability.At(frequencyHz);
-        var mu = new System.Numerics.Complex(point.MuPrime, -point.MuDoublePrime);
-        var shape = WoundGeometry;
-        if (MeasuredAl is { } measured)
-        {
-            // A measured AL already contains any gap: scale the material's curve so that μ(low f) gives that AL.
-            mu *= measured.HenriesPerTurnSquared * shape.EffectiveParameters().CoreFactorC1PerM / (PhysicalConstants.VacuumPermeabilityHPerM * Material.InitialPermeability);
-        }
-        else if (shape is BobbinCore { EnteredAl: { } entered })
-        {
-            var scale = entered.HenriesPerTurnSquared * shape.EffectiveParameters().CoreFactorC1PerM / (PhysicalConstants.VacuumPermeabilityHPerM * Material.InitialPermeability);
-            mu *= scale;
-        }
-        else if (shape.GapLengthM > 0)
-        {
-            mu /= 1 + mu * shape.GapLengthM / shape.EffectiveParameters().EffectiveLengthM;
-        }
+    public (double MuPrime, double MuDoublePrime, bool Extrapolated) PermeabilityAt(double frequencyHz) => PermeabilityFunction()(frequencyHz);
 
-        return (mu.Real, -mu.Imaginary, point.IsExtrapolated);
+    /// <summary>
+    /// <see cref="PermeabilityAt"/> as a function with the core's constants worked out once, for sweeps that ask for many
+    /// frequencies.
+    /// </summary>
+    public Func<double, (double MuPrime, double MuDoublePrime, bool Extrapolated)> PermeabilityFunction()
+    {
+        var shape = WoundGeometry;
+        var effective = shape.EffectiveParameters();
+        var curve = Material.Permeability;
+        var toAlScale = effective.CoreFactorC1PerM / (PhysicalConstants.VacuumPermeabilityHPerM * Material.InitialPermeability);
+        double? scale = MeasuredAl is { } measured
+            ? measured.HenriesPerTurnSquared * toAlScale // a measured AL already contains any gap
+            : shape is BobbinCore { EnteredAl: { } entered } ? entered.HenriesPerTurnSquared * toAlScale : null;
+        var gapOverLength = scale is null && shape.GapLengthM > 0 ? shape.GapLengthM / effective.EffectiveLengthM : 0;
+        return frequencyHz =>
+        {
+            var point = curve.At(frequencyHz);
+            var mu = new System.Numerics.Complex(point.MuPrime, -point.MuDoublePrime);
+            if (scale is { } s)
+            {
+                mu *= s;
+            }
+            else if (gapOverLength > 0)
+            {
+                mu /= 1 + mu * gapOverLength;
+            }
+
+            return (mu.Real, -mu.Imaginary, point.IsExtrapolated);
+        };
     }
 
     /// <summary>AL of the wound core: a measured AL, an entered AL (bobbin cores) or μ0·μe/C1 (IEC 60205; Snelling 1988).</summary>
