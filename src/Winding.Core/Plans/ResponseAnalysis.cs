@@ -66,7 +66,7 @@ public static class ResponseAnalysis
         var ambientC = op.AmbientTemperatureC;
 
         double Rdc(int i) => windings[i].DcResistanceOhm * plan.Windings[i].Wire.Metal.ResistivityOhmM(ambientC) / plan.Windings[i].Wire.Metal.Resistivity20OhmM;
-        double Rac(int i, double f) => Rdc(i) * WindingAcResistance.Evaluate(plan.Windings[i].Wire, Math.Max(1, windings[i].Fit.Layers), f, ambientC).RacPerRdc;
+        double Rac(int i, double f) => Rdc(i) * WindingAcResistance.Evaluate(plan.Windings[i].Wire, Math.Max(1, windings[i].Fit.Layers), Math.Min(f, WindingAcResistance.MaximumFrequencyHz), ambientC).RacPerRdc;
         double Series(double f) => Rac(0, f) + (last > 0 ? Rac(last, f) / (ratio * ratio) : 0);
 
         Func<double, Complex> magnetizing;
@@ -116,7 +116,7 @@ public static class ResponseAnalysis
         ArgumentNullException.ThrowIfNull(exact);
         ArgumentNullException.ThrowIfNull(op);
         var lo = Math.Log10(op.MinFrequencyHz) - 3;
-        var hi = Math.Log10(op.MaxFrequencyHz) + 3;
+        var hi = Math.Min(Math.Log10(op.MaxFrequencyHz) + 3, Math.Log10(WindingAcResistance.MaximumFrequencyHz));
         var count = (int)Math.Ceiling((hi - lo) * SeriesTablePointsPerDecade) + 1;
         var logF = MathNet.Numerics.Generate.LinearSpaced(count, lo, hi);
         var values = logF.Select(x => exact(Math.Pow(10, x))).ToArray();

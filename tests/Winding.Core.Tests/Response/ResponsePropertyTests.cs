@@ -13,24 +13,27 @@ public sealed class ResponsePropertyTests
 
     private static readonly double[] Grid = FrequencySweep.LogSpaced(1, 1e11, 221);
 
-    // Transformers whose top edge is set by the winding capacitance (the leakage corner (RS + RL′)/(2π·L_lk) at least ten
-    // times higher). Where the leakage sets the edge instead, a little shunt capacitance can peak the response and widen
-    // the band slightly (inductive peaking) — real circuit behaviour, so the property is stated for this regime.
-    private static readonly Gen<EquivalentCircuit> CapacitanceLimited =
-        Gen.Select(Gen.Double[5, 1000], Gen.Double[5, 1000], Gen.Double[1e-7, 1e-2], Gen.Double[1e-12, 1e-9], Gen.Double[1e-12, 1e-9], Gen.Double[1e-4, 0.1], Gen.Double[0, 5])
-            .Select((rs, rl, lm, c1, c2, leakageShare, r) =>
+    // Matched, lossless transformers with a clear pass band: the magnetising corner f_L = R_par/(2π·L_m) at least 1000
+    // times below the capacitive corner 1/(2π·R_par·C), and the leakage corner (RS + RL′)/(2π·L_lk) at least ten times
+    // above it. Then the mid-band loss is ~0 dB in every variant and the edges are comparable. Outside such a regime a
+    // little more C can peak a leakage-limited top edge (inductive peaking), or a resonance can move the loss minimum —
+    // real circuit behaviour, so the properties are stated for clean pass bands.
+    private static readonly Gen<EquivalentCircuit> CleanBands =
+        Gen.Select(Gen.Double[5, 1000], Gen.Double[1e-12, 1e-9], Gen.Double[0, 1], Gen.Double[1e-4, 0.1], Gen.Double[1e-6, 1e-3])
+            .Select((r, totalC, split, leakageShare, magnetizingShare) =>
             {
-                var rPar = rs * rl / (rs + rl);
-                var capacitiveCornerHz = 1 / (2 * Math.PI * rPar * (c1 + c2));
-                var llk = leakageShare * (rs + rl) / (2 * Math.PI * capacitiveCornerHz);
-                return new EquivalentCircuit(rs, rl, c1, c2, llk, f => new Complex(0, 2 * Math.PI * f * lm), _ => r);
+                var rPar = r / 2;
+                var capacitiveCornerHz = 1 / (2 * Math.PI * rPar * totalC);
+                var llk = leakageShare * 2 * r / (2 * Math.PI * capacitiveCornerHz);
+                var lm = rPar / (2 * Math.PI * capacitiveCornerHz * magnetizingShare);
+                return new EquivalentCircuit(r, r, totalC * split, totalC * (1 - split), llk, f => new Complex(0, 2 * Math.PI * f * lm), _ => 0);
             });
 
     [Fact]
-    public void MoreCapacitance_NeverRaisesACapacitanceLimitedUpperEdge()
+    public void MoreCapacitance_NeverRaisesTheUpperEdgeOfACleanBand()
     {
         // Shunt capacitance adds a low-pass path with R_par (classic transformer equivalent circuit; physics-sources §9.1).
-        Gen.Select(CapacitanceLimited, Gen.Double[1, 10]).Sample((circuit, factor) =>
+        Gen.Select(CleanBands, Gen.Double[1, 10]).Sample((circuit, factor) =>
         {
             var nominal = BandEdges.Find(circuit, FrequencySweep.Run(circuit, Grid)).UpperCutoffHz;
             var more = circuit.Scaled(1, factor);
@@ -43,10 +46,10 @@ public sealed class ResponsePropertyTests
     }
 
     [Fact]
-    public void MoreMagnetizingInductance_NeverRaisesTheLowerEdge()
+    public void MoreMagnetizingInductance_NeverRaisesTheLowerEdgeOfACleanBand()
     {
         // A larger shunt inductance shunts less at low frequency (f_L = R_par/(2π·L_m); physics-sources §9.1).
-        Gen.Select(Circuits, Gen.Double[1, 10]).Sample((circuit, factor) =>
+        Gen.Select(CleanBands, Gen.Double[1, 10]).Sample((circuit, factor) =>
         {
             var nominal = BandEdges.Find(circuit, FrequencySweep.Run(circuit, Grid)).LowerCutoffHz;
             var more = circuit.Scaled(factor, 1);
