@@ -57,6 +57,7 @@ public static class WindingHostingExtensions
         app.MapStaticAssets();
         app.MapOpenApi();
         app.MapWindingApi();
+        app.MapCharacteriseApi();
         app.MapRazorComponents<App>().AddInteractiveServerRenderMode();
 
         // Load the catalogue at start-up so that file problems are logged at once.
