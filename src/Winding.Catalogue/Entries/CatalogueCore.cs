@@ -8,4 +8,6 @@ namespace Winding.Catalogue.Entries;
 /// <param name="Shape">Geometry of one core.</param>
 /// <param name="Material">The material entry it is made of.</param>
 /// <param name="Source">Provenance of the values.</param>
-public sealed record CatalogueCore(string Id, string Name, CoreShape Shape, CatalogueMaterial Material, string Source);
+/// <param name="BuiltIn">True for an entry shipped with the app (read-only), false for a user entry.</param>
+/// <param name="Version">The user entry's saved version (1 and up); 0 for a built-in entry.</param>
+public sealed record CatalogueCore(string Id, string Name, CoreShape Shape, CatalogueMaterial Material, string Source, bool BuiltIn = true, int Version = 0);

@@ -32,4 +32,13 @@ public sealed class CoreEntryDocument
 
     /// <summary>Where the values come from (handbook typical values, from memory, common practice, measured).</summary>
     public string? Source { get; set; }
+
+    /// <summary>
+    /// Saved version of a user entry (1 and up), set by the store on every save; built-in files have none. A version
+    /// sent with a save is ignored: the store takes the expected version as a separate argument.
+    /// </summary>
+    public int? Version { get; set; }
+
+    /// <summary>When this version was saved (user entries, set by the store; ignored on input).</summary>
+    public DateTimeOffset? SavedAt { get; set; }
 }

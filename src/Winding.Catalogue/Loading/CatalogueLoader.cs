@@ -1,40 +1,74 @@
-using System.Text.Json;
 using Winding.Catalogue.Entries;
 using Winding.Catalogue.Validation;
 
 namespace Winding.Catalogue.Loading;
 
 /// <summary>
-/// Loads a catalogue folder: every <c>*.json</c> file below it (JSON Schema files <c>*.schema.json</c> excluded) holds one
-/// entry, a core (<c>"kind": "core"</c>) or a material (<c>"kind": "material"</c>). A bad file is reported by file name,
-/// JSON path and reason, and everything else still loads.
+/// Loads the catalogue: the built-in folder and, optionally, the user's catalogue folder. Every <c>*.json</c> file below
+/// a folder (JSON Schema files <c>*.schema.json</c> excluded; in the user folder also the <c>history</c> subfolder) holds
+/// one entry, a core (<c>"kind": "core"</c>) or a material (<c>"kind": "material"</c>). A bad file is reported by file
+/// name (relative to its folder, user files prefixed <c>user/</c>), JSON path and reason, and everything else still
+/// loads. User entries may not reuse a built-in id; user cores may use built-in or user materials, built-in cores only
+/// built-in ones.
 /// </summary>
 public static class CatalogueLoader
 {
     /// <summary>Permeability range accepted for a material, 1 to 100 000.</summary>
     public const double MaximumPermeability = 100_000;
 
-    /// <summary>Loads the catalogue in <paramref name="directory"/>.</summary>
-    public static CoreCatalogue Load(string directory)
+    /// <summary>Prefix of user file names in problems.</summary>
+    public const string UserPrefix = "user/";
+
+    /// <summary>The subfolder of the user catalogue that holds earlier versions; never loaded as entries.</summary>
+    public const string HistoryFolder = "history";
+
+    /// <summary>The user catalogue's folder of material files (<c>{id}.json</c>).</summary>
+    public const string UserMaterialsFolder = "materials";
+
+    /// <summary>The user catalogue's folder of core files (<c>{id}.json</c>).</summary>
+    public const string UserCoresFolder = "cores";
+
+    /// <summary>Loads the built-in catalogue in <paramref name="directory"/> only.</summary>
+    public static CoreCatalogue Load(string directory) => Load(directory, null);
+
+    /// <summary>
+    /// Loads the built-in catalogue in <paramref name="builtInDirectory"/> and the user entries in
+    /// <paramref name="userDirectory"/> (<c>materials/{id}.json</c> and <c>cores/{id}.json</c>; a missing user folder
+    /// simply holds no entries).
+    /// </summary>
+    public static CoreCatalogue Load(string builtInDirectory, string? userDirectory)
     {
-        ArgumentNullException.ThrowIfNull(directory);
+        ArgumentNullException.ThrowIfNull(builtInDirectory);
         var problems = new List<CatalogueProblem>();
+        var builtIn = ReadFolder(builtInDirectory, user: false, problems);
+        var user = userDirectory is null ? [] : ReadFolder(userDirectory, user: true, problems);
+        return Build(builtIn, user, problems);
+    }
+
+    /// <summary>Reads and parses every entry file of a folder; unreadable files become problems.</summary>
+    internal static List<LoadedFile> ReadFolder(string directory, bool user, List<CatalogueProblem> problems)
+    {
+        var entries = new List<LoadedFile>();
         if (!Directory.Exists(directory))
         {
-            problems.Add(new CatalogueProblem(directory, "$", "The catalogue folder does not exist."));
-            return new CoreCatalogue([], [], problems);
+            if (!user)
+            {
+                problems.Add(new CatalogueProblem(directory, "$", "The catalogue folder does not exist."));
+            }
+
+            return entries;
         }
 
-        var materials = new Dictionary<string, CatalogueMaterial>(StringComparer.Ordinal);
-        var coreDocuments = new List<(string File, CoreEntryDocument Document)>();
-        var seenIds = new Dictionary<string, string>(StringComparer.Ordinal);
+        var prefix = user ? UserPrefix : string.Empty;
         var files = Directory.EnumerateFiles(directory, "*.json", SearchOption.AllDirectories)
             .Where(f => !f.EndsWith(".schema.json", StringComparison.OrdinalIgnoreCase))
             .Select(f => (Full: f, Relative: Path.GetRelativePath(directory, f).Replace('\\', '/')))
+            .Where(f => !user || !f.Relative.StartsWith(HistoryFolder + "/", StringComparison.Ordinal))
             .OrderBy(f => f.Relative, StringComparer.Ordinal);
 
         foreach (var (full, relative) in files)
         {
+            var name = prefix + relative;
             string text;
             try
             {
@@ -42,97 +76,78 @@ public static class CatalogueLoader
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException)
             {
-                problems.Add(new CatalogueProblem(relative, "$", "The file could not be read: " + e.Message));
+                problems.Add(new CatalogueProblem(name, "$", "The file could not be read: " + e.Message));
                 continue;
             }
 
-            string? kind;
-            try
+            var parsed = EntryParser.Parse(text);
+            if (!parsed.Succeeded)
             {
-                using var json = JsonDocument.Parse(text, new JsonDocumentOptions { CommentHandling = JsonCommentHandling.Skip, AllowTrailingCommas = true });
-                if (json.RootElement.ValueKind != JsonValueKind.Object)
-                {
-                    problems.Add(new CatalogueProblem(relative, "$", "The file must hold one JSON object."));
-                    continue;
-                }
-
-                kind = json.RootElement.TryGetProperty("kind", out var k) && k.ValueKind == JsonValueKind.String ? k.GetString() : null;
-            }
-            catch (JsonException e)
-            {
-                problems.Add(new CatalogueProblem(relative, JsonErrorText.PathOf(e), "Not valid JSON: " + JsonErrorText.ReasonOf(e)));
+                problems.Add(new CatalogueProblem(name, parsed.ErrorPath!, parsed.ErrorReason!));
                 continue;
             }
 
-            try
+            if (user && !UserFileNameMatches(relative, parsed, problems, name))
             {
-                switch (kind)
-                {
-                    case "material":
-                        var materialDocument = JsonSerializer.Deserialize<MaterialEntryDocument>(text, CatalogueJson.Options)!;
-                        var material = ToMaterial(relative, materialDocument, problems);
-                        if (material is not null && Register(relative, material.Id, seenIds, problems))
-                        {
-                            materials.Add(material.Id, material);
-                        }
-
-                        break;
-                    case "core":
-                        coreDocuments.Add((relative, JsonSerializer.Deserialize<CoreEntryDocument>(text, CatalogueJson.Options)!));
-                        break;
-                    default:
-                        problems.Add(new CatalogueProblem(relative, "$.kind", "Missing or unknown kind: use \"core\" or \"material\"."));
-                        break;
-                }
+                continue;
             }
-            catch (JsonException e)
+
+            entries.Add(new LoadedFile(name, user, parsed));
+        }
+
+        return entries;
+    }
+
+    /// <summary>Validates parsed files into a catalogue: built-in materials, built-in cores, user materials, user cores.</summary>
+    internal static CoreCatalogue Build(IReadOnlyList<LoadedFile> builtIn, IReadOnlyList<LoadedFile> user, IEnumerable<CatalogueProblem> earlierProblems)
+    {
+        var problems = new List<CatalogueProblem>(earlierProblems);
+        var materials = new Dictionary<string, CatalogueMaterial>(StringComparer.Ordinal);
+        var cores = new List<CatalogueCore>();
+        var seenIds = new Dictionary<string, LoadedFile>(StringComparer.Ordinal);
+        foreach (var group in new[] { builtIn, user })
+        {
+            foreach (var file in group.Where(f => f.Entry.Material is not null))
             {
-                problems.Add(new CatalogueProblem(relative, JsonErrorText.PathOf(e), JsonErrorText.ReasonOf(e)));
+                var validator = new FieldValidator();
+                var material = ToMaterial(validator, file.Entry.Material!, !file.User, VersionOf(file, validator));
+                if (Accept(file, material?.Id, validator, seenIds, problems))
+                {
+                    materials.Add(material!.Id, material);
+                }
             }
         }
 
-        var cores = new List<CatalogueCore>();
-        foreach (var (file, document) in coreDocuments)
+        foreach (var group in new[] { builtIn, user })
         {
-            var core = ToCore(file, document, materials, problems);
-            if (core is not null && Register(file, core.Id, seenIds, problems))
+            foreach (var file in group.Where(f => f.Entry.Core is not null))
             {
-                cores.Add(core);
+                var validator = new FieldValidator();
+                var core = ToCore(validator, file.Entry.Core!, materials, !file.User, VersionOf(file, validator));
+                if (Accept(file, core?.Id, validator, seenIds, problems))
+                {
+                    cores.Add(core!);
+                }
             }
         }
 
         return new CoreCatalogue(cores, materials.Values, problems);
     }
 
-    private static bool Register(string file, string id, Dictionary<string, string> seenIds, List<CatalogueProblem> problems)
+    /// <summary>Validates a material document; null (with errors in <paramref name="validator"/>) when refused.</summary>
+    internal static CatalogueMaterial? ToMaterial(FieldValidator validator, MaterialEntryDocument document, bool builtIn, int version)
     {
-        if (seenIds.TryGetValue(id, out var other))
-        {
-            problems.Add(new CatalogueProblem(file, "$.id", $"The id '{id}' is already used by {other}."));
-            return false;
-        }
-
-        seenIds.Add(id, file);
-        return true;
-    }
-
-    private static CatalogueMaterial? ToMaterial(string file, MaterialEntryDocument document, List<CatalogueProblem> problems)
-    {
-        var validator = new FieldValidator();
         CheckCommon(validator, document.Id, document.Name);
         var material = MaterialRules.Validate(validator, document);
-        if (!validator.IsValid || material is null)
-        {
-            Report(file, validator, problems);
-            return null;
-        }
-
-        return new CatalogueMaterial(document.Id!, document.Name!, document.Family!, material, document.Source!);
+        return !validator.IsValid || material is null
+            ? null
+            : new CatalogueMaterial(document.Id!, document.Name!, document.Family!, material, document.Source!, builtIn, version);
     }
 
-    private static CatalogueCore? ToCore(string file, CoreEntryDocument document, Dictionary<string, CatalogueMaterial> materials, List<CatalogueProblem> problems)
+    /// <summary>Validates a core document against the materials it may use; null (with errors) when refused.</summary>
+    internal static CatalogueCore? ToCore(
+        FieldValidator validator, CoreEntryDocument document, IReadOnlyDictionary<string, CatalogueMaterial> materials, bool builtIn, int version)
     {
-        var validator = new FieldValidator();
         CheckCommon(validator, document.Id, document.Name);
         var shape = CoreShapeRules.Validate(validator, string.Empty, document.Shape, document.Family, document.DimensionsMm, document.Effective, document.AlNh);
         CatalogueMaterial? material = null;
@@ -145,13 +160,64 @@ public static class CatalogueLoader
             validator.Add("materialId", $"No material with the id '{document.MaterialId}' is in the catalogue.");
         }
 
-        if (!validator.IsValid || shape is null || material is null)
+        return !validator.IsValid || shape is null || material is null
+            ? null
+            : new CatalogueCore(document.Id!, document.Name!, shape, material, document.Source ?? string.Empty, builtIn, version);
+    }
+
+    private static int VersionOf(LoadedFile file, FieldValidator validator)
+    {
+        if (!file.User)
         {
-            Report(file, validator, problems);
-            return null;
+            return 0;
         }
 
-        return new CatalogueCore(document.Id!, document.Name!, shape, material, document.Source ?? string.Empty);
+        // A hand-written user file without a version counts as version 1.
+        var version = file.Entry.Version ?? 1;
+        if (version < 1)
+        {
+            validator.Add("version", $"{version} is out of range: a saved version is a whole number from 1.");
+        }
+
+        return version;
+    }
+
+    private static bool Accept(LoadedFile file, string? id, FieldValidator validator, Dictionary<string, LoadedFile> seenIds, List<CatalogueProblem> problems)
+    {
+        if (!validator.IsValid || id is null)
+        {
+            foreach (var error in validator.Errors)
+            {
+                problems.Add(new CatalogueProblem(file.Name, "$." + error.Field, error.Message));
+            }
+
+            return false;
+        }
+
+        if (seenIds.TryGetValue(id, out var other))
+        {
+            problems.Add(new CatalogueProblem(file.Name, "$.id", file.User && !other.User
+                ? $"The id '{id}' is already used by the built-in entry {other.Name}: a user entry needs an id of its own (clone the built-in entry under a new id)."
+                : $"The id '{id}' is already used by {other.Name}."));
+            return false;
+        }
+
+        seenIds.Add(id, file);
+        return true;
+    }
+
+    private static bool UserFileNameMatches(string relative, EntryParseResult entry, List<CatalogueProblem> problems, string name)
+    {
+        var folder = entry.Material is not null ? UserMaterialsFolder : UserCoresFolder;
+        if (EntryId.IsValid(entry.Id) && relative == $"{folder}/{entry.Id}.json")
+        {
+            return true;
+        }
+
+        problems.Add(new CatalogueProblem(name, "$.id", EntryId.IsValid(entry.Id)
+            ? $"A user {entry.Kind} file must be named after its id: expected {UserPrefix}{folder}/{entry.Id}.json."
+            : $"'{entry.Id}' is not a valid id: {EntryId.Rule}."));
+        return false;
     }
 
     private static void CheckCommon(FieldValidator validator, string? id, string? name)
@@ -164,14 +230,6 @@ public static class CatalogueLoader
         if (string.IsNullOrWhiteSpace(name) || name.Length > 120)
         {
             validator.Add("name", "Required: a name of 1 to 120 characters.");
-        }
-    }
-
-    private static void Report(string file, FieldValidator validator, List<CatalogueProblem> problems)
-    {
-        foreach (var error in validator.Errors)
-        {
-            problems.Add(new CatalogueProblem(file, "$." + error.Field, error.Message));
         }
     }
 }
