@@ -19,9 +19,9 @@ public abstract class WindingComponentTestBase : BunitContext, IAsyncLifetime
         // is not enough on a loaded 2-core CI machine. Waits still end as soon as their condition holds.
         DefaultWaitTimeout = TimeSpan.FromSeconds(10);
         Services.AddMudServices();
-        var paths = new WindingPaths(Path.Combine(AppContext.BaseDirectory, "cores"), Path.Combine(Path.GetTempPath(), "winding-tests"));
+        var paths = new WindingPaths(Path.Combine(AppContext.BaseDirectory, "cores"), Path.Combine(Path.GetTempPath(), "winding-tests-" + Guid.NewGuid().ToString("N")));
         Services.AddSingleton(paths);
-        Services.AddSingleton(new CatalogueProvider(paths, NullLogger<CatalogueProvider>.Instance));
+        Services.AddSingleton(new CatalogueProvider(paths, TimeProvider.System, NullLogger<CatalogueProvider>.Instance));
         Services.AddScoped<PlanningState>();
         JSInterop.Mode = JSRuntimeMode.Loose;
         SetRendererInfo(new RendererInfo("Server", isInteractive: true));

@@ -6,5 +6,8 @@ namespace Winding.Web.Api;
 public static class ApiJson
 {
     /// <summary>Response serialisation options.</summary>
-    public static JsonSerializerOptions Options { get; } = new(JsonSerializerDefaults.Web);
+    public static JsonSerializerOptions Options { get; } = new(JsonSerializerDefaults.Web)
+    {
+        Converters = { new System.Text.Json.Serialization.JsonStringEnumConverter(JsonNamingPolicy.KebabCaseLower) },
+    };
 }

@@ -1,27 +1,52 @@
 using Winding.Catalogue.Loading;
+using Winding.Catalogue.Store;
 
 namespace Winding.Web.Hosting;
 
 /// <summary>
-/// Holds the built-in catalogue, loaded once at start-up. Shared, read-only data: safe as a singleton. Problems met while
-/// loading are logged and kept for display.
+/// The catalogue the app works with: the built-in entries merged with the user's own (from the data folder), as an
+/// immutable snapshot that is replaced after every write. Shared by all circuits and requests (a singleton: the snapshot
+/// is read-only and the store serialises its writers). Problems met while loading are logged and kept for display.
 /// </summary>
 public sealed class CatalogueProvider
 {
-    /// <summary>Loads the catalogue from <paramref name="paths"/>.</summary>
-    public CatalogueProvider(WindingPaths paths, ILogger<CatalogueProvider> logger)
+    private readonly ILogger<CatalogueProvider> _logger;
+    private CoreCatalogue _catalogue;
+
+    /// <summary>Loads the built-in and user catalogues from <paramref name="paths"/>.</summary>
+    public CatalogueProvider(WindingPaths paths, TimeProvider timeProvider, ILogger<CatalogueProvider> logger)
     {
         ArgumentNullException.ThrowIfNull(paths);
         ArgumentNullException.ThrowIfNull(logger);
-        Catalogue = CatalogueLoader.Load(paths.CatalogueDirectory);
-        foreach (var problem in Catalogue.Problems)
-        {
-            logger.LogWarning("Catalogue file {File} at {Path}: {Reason}", problem.FileName, problem.JsonPath, problem.Reason);
-        }
-
-        logger.LogInformation("Catalogue {Directory}: {Cores} cores, {Materials} materials", paths.CatalogueDirectory, Catalogue.Cores.Count, Catalogue.Materials.Count);
+        _logger = logger;
+        Store = new UserCatalogueStore(paths.DataDirectory, paths.CatalogueDirectory, timeProvider);
+        _catalogue = Store.Load();
+        Log(paths.CatalogueDirectory);
     }
 
-    /// <summary>The loaded catalogue.</summary>
-    public CoreCatalogue Catalogue { get; }
+    /// <summary>The user catalogue store (all writes go through it).</summary>
+    public UserCatalogueStore Store { get; }
+
+    /// <summary>The current catalogue snapshot.</summary>
+    public CoreCatalogue Catalogue => Volatile.Read(ref _catalogue);
+
+    /// <summary>Raised after the catalogue changed.</summary>
+    public event Action? Changed;
+
+    /// <summary>Reloads the snapshot after a write.</summary>
+    public void Reload()
+    {
+        Volatile.Write(ref _catalogue, Store.Load());
+        Changed?.Invoke();
+    }
+
+    private void Log(string directory)
+    {
+        foreach (var problem in _catalogue.Problems)
+        {
+            _logger.LogWarning("Catalogue file {File} at {Path}: {Reason}", problem.FileName, problem.JsonPath, problem.Reason);
+        }
+
+        _logger.LogInformation("Catalogue {Directory} and {User}: {Cores} cores, {Materials} materials", directory, Store.CatalogueDirectory, _catalogue.Cores.Count, _catalogue.Materials.Count);
+    }
 }

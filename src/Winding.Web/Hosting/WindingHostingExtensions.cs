@@ -58,6 +58,7 @@ public static class WindingHostingExtensions
         app.MapOpenApi();
         app.MapWindingApi();
         app.MapCharacteriseApi();
+        app.MapCatalogueApi();
         app.MapRazorComponents<App>().AddInteractiveServerRenderMode();
 
         // Load the catalogue at start-up so that file problems are logged at once.
