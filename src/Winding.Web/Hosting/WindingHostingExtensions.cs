@@ -40,6 +40,7 @@ public static class WindingHostingExtensions
         services.AddSingleton<CatalogueProvider>();
         services.AddSingleton(TimeProvider.System);
         services.AddScoped<PlanningState>();
+        services.AddScoped<Characterising.CharacterisationState>();
         return services;
     }
 

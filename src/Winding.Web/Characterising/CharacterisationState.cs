@@ -1,0 +1,206 @@
+using System.Globalization;
+using System.Text.Json;
+using Winding.Catalogue.Characterisation;
+using Winding.Catalogue.Entries;
+using Winding.Catalogue.Loading;
+using Winding.Catalogue.Store;
+using Winding.Catalogue.Validation;
+using Winding.Web.Display;
+using Winding.Web.Hosting;
+
+namespace Winding.Web.Characterising;
+
+/// <summary>
+/// The "measure a salvaged core" page's view model: the caliper reading and the test winding's measurement as typed, the
+/// characterisation (through the same <see cref="CharacterisationReader"/> as the API), and saving the result as a new
+/// material and core in the user's catalogue with the measurement kept as their provenance.
+/// </summary>
+public sealed class CharacterisationState
+{
+    private readonly CatalogueProvider _catalogue;
+    private readonly TimeProvider _time;
+    private readonly Dictionary<string, string> _errors = new(StringComparer.Ordinal);
+
+    /// <summary>Creates the state with an empty form for a split sleeve.</summary>
+    public CharacterisationState(CatalogueProvider catalogue, TimeProvider time)
+    {
+        ArgumentNullException.ThrowIfNull(catalogue);
+        ArgumentNullException.ThrowIfNull(time);
+        _catalogue = catalogue;
+        _time = time;
+    }
+
+    /// <summary><c>toroid</c> or <c>sleeve</c>.</summary>
+    public string Shape { get; set; } = CoreShapes.Sleeve;
+
+    /// <summary>Outer diameter (mm) as typed.</summary>
+    public string OuterDiameter { get; set; } = string.Empty;
+
+    /// <summary>Inner diameter or bore (mm) as typed.</summary>
+    public string InnerDiameter { get; set; } = string.Empty;
+
+    /// <summary>Height of a toroid or length of a sleeve (mm) as typed.</summary>
+    public string Length { get; set; } = string.Empty;
+
+    /// <summary>Residual gap of a split sleeve (mm) as typed; empty for a solid core.</summary>
+    public string ResidualGap { get; set; } = string.Empty;
+
+    /// <summary>Turns of the test winding as typed.</summary>
+    public string Turns { get; set; } = string.Empty;
+
+    /// <summary>Measurement frequency as typed (Hz, SI prefixes allowed).</summary>
+    public string Frequency { get; set; } = "100 kHz";
+
+    /// <summary>Measured inductance as typed (H, SI prefixes allowed).</summary>
+    public string Inductance { get; set; } = string.Empty;
+
+    /// <summary>Measured Q as typed (optional).</summary>
+    public string Quality { get; set; } = string.Empty;
+
+    /// <summary>The name to save under.</summary>
+    public string SaveName { get; set; } = string.Empty;
+
+    /// <summary>The latest characterisation.</summary>
+    public CharacterisationResult? Result { get; private set; }
+
+    /// <summary>The core id saved last, if any.</summary>
+    public string? SavedCoreId { get; private set; }
+
+    /// <summary>A message about the last save.</summary>
+    public string? SaveMessage { get; private set; }
+
+    /// <summary>The error at a field path, or null.</summary>
+    public string? ErrorFor(string path) => _errors.GetValueOrDefault(path);
+
+    /// <summary>Works the measurement out; field errors otherwise.</summary>
+    public void Characterise()
+    {
+        _errors.Clear();
+        Result = null;
+        SavedCoreId = null;
+        SaveMessage = null;
+        var document = new CharacteriseDocument
+        {
+            Core = new CharacteriseCoreDocument
+            {
+                Shape = Shape,
+                DimensionsMm = Shape == CoreShapes.Toroid
+                    ? new DimensionsMmDocument { OuterDiameter = Number("core.dimensionsMm.outerDiameter", OuterDiameter, "mm"), InnerDiameter = Number("core.dimensionsMm.innerDiameter", InnerDiameter, "mm"), Height = Number("core.dimensionsMm.height", Length, "mm") }
+                    : new DimensionsMmDocument { OuterDiameter = Number("core.dimensionsMm.outerDiameter", OuterDiameter, "mm"), InnerDiameter = Number("core.dimensionsMm.innerDiameter", InnerDiameter, "mm"), Length = Number("core.dimensionsMm.length", Length, "mm"), ResidualGap = string.IsNullOrWhiteSpace(ResidualGap) ? null : Number("core.dimensionsMm.residualGap", ResidualGap, "mm") },
+            },
+            Turns = (int?)Number("turns", Turns, string.Empty),
+            FrequencyHz = Number("frequencyHz", Frequency, "Hz"),
+            InductanceH = Number("inductanceH", Inductance, "H"),
+            QualityFactor = string.IsNullOrWhiteSpace(Quality) ? null : Number("qualityFactor", Quality, string.Empty),
+        };
+        if (_errors.Count > 0)
+        {
+            return;
+        }
+
+        var (result, errors) = CharacterisationReader.Read(document, _catalogue.Catalogue);
+        foreach (var error in errors)
+        {
+            _errors.TryAdd(error.Field, error.Message);
+        }
+
+        Result = result;
+        if (result is not null && string.IsNullOrWhiteSpace(SaveName))
+        {
+            SaveName = DefaultName();
+        }
+    }
+
+    /// <summary>Saves the characterised core and its measured material to the user's catalogue.</summary>
+    public void Save()
+    {
+        if (Result?.FromInductance is not { } measured || string.IsNullOrWhiteSpace(SaveName))
+        {
+            SaveMessage = "Work the measurement out first, and give it a name.";
+            return;
+        }
+
+        var nearest = Result.NearestClasses.Count > 0 ? Result.NearestClasses[0] : null;
+
+        // The measured μe of a split sleeve includes its residual gap; the material keeps the intrinsic μi, found by
+        // inverting μe = μi/(1 + μi·g/le) (Snelling 1988): μi = μe/(1 − μe·g/le). Where the gap alone would explain
+        // the measurement the gap is left out and the measured μe kept.
+        var gapMm = Shape == CoreShapes.Sleeve && !string.IsNullOrWhiteSpace(ResidualGap) ? Number("x", ResidualGap, "mm") ?? 0 : 0;
+        var share = measured.EffectivePermeability * gapMm * 1e-3 / Result.Effective.EffectiveLengthM;
+        var keepGap = gapMm > 0 && share < 0.95;
+        var intrinsicMu = keepGap ? measured.EffectivePermeability / (1 - share) : measured.EffectivePermeability;
+        var family = nearest is not null && _catalogue.Catalogue.MaterialsById.TryGetValue(nearest.Id, out var near) ? near.Family : "NiZn";
+        var slug = Slug(SaveName);
+        var when = _time.GetUtcNow().ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
+        var provenance = string.Create(CultureInfo.InvariantCulture, $"Measured {when}: {Turns.Trim()} turns, {Inductance.Trim()} at {Frequency.Trim()}{(string.IsNullOrWhiteSpace(Quality) ? string.Empty : ", Q " + Quality.Trim())}; AL = L/N², μe = AL·C1/μ0 (IEC 62044-2 relations).");
+        var material = new MaterialEntryDocument
+        {
+            Kind = "material",
+            Id = slug + "-material",
+            Name = string.Create(CultureInfo.InvariantCulture, $"{family}, μi {intrinsicMu:0} ({SaveName.Trim()})"),
+            Family = family,
+            InitialPermeability = Math.Round(intrinsicMu, 6),
+            Source = provenance,
+        };
+        var materialResult = _catalogue.Store.Create(CatalogueEntryKind.Material, JsonSerializer.Serialize(material, CatalogueJson.Options));
+        if (!materialResult.Succeeded)
+        {
+            SaveMessage = materialResult.Message + " " + string.Join(" ", materialResult.Errors.Select(e => e.Field + ": " + e.Message));
+            return;
+        }
+
+        var core = new CoreEntryDocument
+        {
+            Kind = "core",
+            Id = slug,
+            Name = SaveName.Trim(),
+            Shape = Shape,
+            DimensionsMm = Shape == CoreShapes.Toroid
+                ? new DimensionsMmDocument { OuterDiameter = Number("x", OuterDiameter, "mm"), InnerDiameter = Number("x", InnerDiameter, "mm"), Height = Number("x", Length, "mm") }
+                : new DimensionsMmDocument { OuterDiameter = Number("x", OuterDiameter, "mm"), InnerDiameter = Number("x", InnerDiameter, "mm"), Length = Number("x", Length, "mm"), ResidualGap = keepGap ? gapMm : null },
+            MaterialId = material.Id,
+            Source = "Caliper reading and test winding. " + provenance,
+        };
+        var coreResult = _catalogue.Store.Create(CatalogueEntryKind.Core, JsonSerializer.Serialize(core, CatalogueJson.Options));
+        _catalogue.Reload();
+        if (!coreResult.Succeeded)
+        {
+            SaveMessage = coreResult.Message + " " + string.Join(" ", coreResult.Errors.Select(e => e.Field + ": " + e.Message));
+            return;
+        }
+
+        SavedCoreId = core.Id;
+        SaveMessage = $"Saved as '{core.Name}' with its material '{material.Name}'.";
+    }
+
+    private string DefaultName()
+    {
+        var word = Shape == CoreShapes.Toroid ? "Toroid" : string.IsNullOrWhiteSpace(ResidualGap) ? "Sleeve" : "Split sleeve";
+        return $"{word} {OuterDiameter.Trim()} × {InnerDiameter.Trim()} × {Length.Trim()} mm (bench)";
+    }
+
+    private static string Slug(string name)
+    {
+        var chars = name.ToLowerInvariant().Select(c => char.IsAsciiLetterOrDigit(c) ? c : '-').ToArray();
+        var slug = string.Join('-', new string(chars).Split('-', StringSplitOptions.RemoveEmptyEntries));
+        slug = slug.Length > 60 ? slug[..60].Trim('-') : slug;
+        return EntryId.IsValid(slug) ? slug : "salvaged-core";
+    }
+
+    private double? Number(string path, string text, string unit)
+    {
+        if (string.IsNullOrWhiteSpace(text))
+        {
+            _errors[path] = "Required.";
+            return null;
+        }
+
+        var value = EngineeringNumber.TryParse(text, unit);
+        if (value is null)
+        {
+            _errors[path] = $"'{text.Trim()}' is not a number{(unit.Length > 0 ? " in " + unit : string.Empty)}.";
+        }
+
+        return value;
+    }
+}
