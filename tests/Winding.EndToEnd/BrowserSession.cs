@@ -38,7 +38,7 @@ public sealed class BrowserSession : IAsyncDisposable
     {
         var page = await Browser.NewPageAsync(new BrowserNewPageOptions { ViewportSize = new ViewportSize { Width = 1280, Height = 900 } });
         await page.GotoAsync(address.ToString());
-        await page.Locator("[data-interactive=true]").WaitForAsync(new LocatorWaitForOptions { Timeout = 30_000 });
+        await page.Locator("#app-content[data-interactive=true]").WaitForAsync(new LocatorWaitForOptions { Timeout = 30_000 });
         return page;
     }
 

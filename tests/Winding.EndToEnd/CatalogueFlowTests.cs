@@ -29,7 +29,7 @@ public sealed class CatalogueFlowTests : IClassFixture<ServerFixture>
         await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "measure-page.png"), FullPage = true });
 
         await page.GetByTestId("measure-plan-link").ClickAsync();
-        await page.Locator("[data-interactive=true]").WaitForAsync();
+        await page.Locator("#app-content[data-interactive=true]").WaitForAsync();
 
         // 12 µH on 5 turns is AL = 480 nH (AL = L/N²); the plan page's AL is the stored core's, so it reads 480 nH.
         await Assertions.Expect(page.GetByTestId("value-al")).ToContainTextAsync("480 nH");
@@ -48,5 +48,30 @@ public sealed class CatalogueFlowTests : IClassFixture<ServerFixture>
         await Assertions.Expect(page.GetByTestId("core-name")).ToHaveTextAsync("Toroid 36 × 23 × 15 mm");
         await Assertions.Expect(page.GetByTestId("value-le")).ToContainTextAsync("mm");
         await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "core-detail.png"), FullPage = true });
+    }
+
+    [SkippableFact]
+    public async Task EditingFromTwoTabs_GivesAConflictInsteadOfALostEdit()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        var tabA = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/catalogue/materials/nizn-250"));
+        await tabA.Locator("#clone-name").FillAsync("NiZn, μi 250 (club bench)");
+        await tabA.GetByTestId("clone").ClickAsync();
+        await Assertions.Expect(tabA.GetByTestId("material-name")).ToHaveTextAsync("NiZn, μi 250 (club bench)");
+        var address = new Uri(tabA.Url);
+        await tabA.Locator("#app-content[data-interactive=true]").WaitForAsync();
+        var tabB = await session.OpenInteractiveAsync(address);
+
+        await tabA.Locator("#edit-mu").FillAsync("240");
+        await tabA.GetByTestId("save").ClickAsync();
+        await Assertions.Expect(tabA.GetByTestId("entry-message")).ToContainTextAsync("Saved as version 2");
+        await tabB.Locator("#edit-mu").FillAsync("260");
+        await tabB.GetByTestId("save").ClickAsync();
+
+        await Assertions.Expect(tabB.GetByTestId("entry-message")).ToContainTextAsync("Reload to see the newer version");
+        await tabB.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "edit-conflict.png"), FullPage = true });
+        using var client = _server.CreateClient();
+        var stored = await client.GetStringAsync(new Uri("/api/v1/materials/" + address.Segments[^1], UriKind.Relative));
+        Assert.Contains("\"initialPermeability\":240", stored, StringComparison.Ordinal);
     }
 }
