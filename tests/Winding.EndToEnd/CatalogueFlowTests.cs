@@ -68,7 +68,7 @@ public sealed class CatalogueFlowTests : IClassFixture<ServerFixture>
         await tabB.Locator("#edit-mu").FillAsync("260");
         await tabB.GetByTestId("save").ClickAsync();
 
-        await Assertions.Expect(tabB.GetByTestId("entry-message")).ToContainTextAsync("Reload to see the newer version");
+        await Assertions.Expect(tabB.GetByTestId("entry-message")).ToContainTextAsync("has changed since you opened it");
         await tabB.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "edit-conflict.png"), FullPage = true });
         using var client = _server.CreateClient();
         var stored = await client.GetStringAsync(new Uri("/api/v1/materials/" + address.Segments[^1], UriKind.Relative));

@@ -60,6 +60,27 @@ public sealed class CharacterisationState
     /// <summary>The name to save under.</summary>
     public string SaveName { get; set; } = string.Empty;
 
+    /// <summary>Impedances read from an uploaded Touchstone file (empty when none).</summary>
+    public IReadOnlyList<ImpedancePointDocument> Impedances { get; private set; } = [];
+
+    /// <summary>What the uploaded file held, or why it was refused.</summary>
+    public string? FileMessage { get; private set; }
+
+    /// <summary>Reads a Touchstone version 1 one-port file of the test winding (refused with its line number when malformed).</summary>
+    public void LoadTouchstone(string fileName, string text)
+    {
+        var parsed = Winding.Catalogue.Touchstone.TouchstoneFile.Parse(text);
+        if (!parsed.IsValid)
+        {
+            Impedances = [];
+            FileMessage = $"{fileName}: " + (parsed.Error!.LineNumber is { } line ? string.Create(CultureInfo.InvariantCulture, $"line {line}: ") : string.Empty) + parsed.Error.Reason;
+            return;
+        }
+
+        Impedances = [.. parsed.File!.Points.Where(p => p.FrequencyHz > 0).Select(p => new ImpedancePointDocument { FrequencyHz = p.FrequencyHz, Re = p.ImpedanceOhm.Real, Im = p.ImpedanceOhm.Imaginary })];
+        FileMessage = string.Create(CultureInfo.InvariantCulture, $"{fileName}: {Impedances.Count} points from {EngineeringFormat.Format(Impedances[0].FrequencyHz ?? 0, "Hz")} to {EngineeringFormat.Format(Impedances[^1].FrequencyHz ?? 0, "Hz")}.");
+    }
+
     /// <summary>The latest characterisation.</summary>
     public CharacterisationResult? Result { get; private set; }
 
@@ -90,9 +111,15 @@ public sealed class CharacterisationState
             },
             Turns = (int?)Number("turns", Turns, string.Empty),
             FrequencyHz = Number("frequencyHz", Frequency, "Hz"),
-            InductanceH = Number("inductanceH", Inductance, "H"),
+            InductanceH = Impedances.Count > 0 && string.IsNullOrWhiteSpace(Inductance) ? null : Number("inductanceH", Inductance, "H"),
             QualityFactor = string.IsNullOrWhiteSpace(Quality) ? null : Number("qualityFactor", Quality, string.Empty),
+            Impedances = [.. Impedances],
         };
+        if (document.InductanceH is null)
+        {
+            document.FrequencyHz = null;
+            _errors.Remove("frequencyHz");
+        }
         if (_errors.Count > 0)
         {
             return;
@@ -114,7 +141,8 @@ public sealed class CharacterisationState
     /// <summary>Saves the characterised core and its measured material to the user's catalogue.</summary>
     public void Save()
     {
-        if (Result?.FromInductance is not { } measured || string.IsNullOrWhiteSpace(SaveName))
+        var measuredMu = Result?.FromInductance?.EffectivePermeability ?? (Result?.Fit is { Converged: true } f ? f.Parameters.InitialPermeability : (double?)null);
+        if (Result is null || measuredMu is null || string.IsNullOrWhiteSpace(SaveName))
         {
             SaveMessage = "Work the measurement out first, and give it a name.";
             return;
@@ -126,13 +154,24 @@ public sealed class CharacterisationState
         // inverting μe = μi/(1 + μi·g/le) (Snelling 1988): μi = μe/(1 − μe·g/le). Where the gap alone would explain
         // the measurement the gap is left out and the measured μe kept.
         var gapMm = Shape == CoreShapes.Sleeve && !string.IsNullOrWhiteSpace(ResidualGap) ? Number("x", ResidualGap, "mm") ?? 0 : 0;
-        var share = measured.EffectivePermeability * gapMm * 1e-3 / Result.Effective.EffectiveLengthM;
+        var share = measuredMu.Value * gapMm * 1e-3 / Result.Effective.EffectiveLengthM;
         var keepGap = gapMm > 0 && share < 0.95;
-        var intrinsicMu = keepGap ? measured.EffectivePermeability / (1 - share) : measured.EffectivePermeability;
+        var intrinsicMu = keepGap ? measuredMu.Value / (1 - share) : measuredMu.Value;
+
+        // A converged relaxation fit of measured impedances becomes the material's μ′(f), μ″(f) table, scaled to the
+        // intrinsic μi like the single value above.
+        List<PermeabilityPointDocument?>? table = null;
+        if (Result.Fit is { Converged: true } fit)
+        {
+            var scale = intrinsicMu / fit.Parameters.InitialPermeability;
+            table = [.. fit.Curve.Points.Select(p => (PermeabilityPointDocument?)new PermeabilityPointDocument { FrequencyHz = p.FrequencyHz, Real = Math.Round(p.MuPrime * scale, 6), Imaginary = Math.Round(p.MuDoublePrime * scale, 6) })];
+        }
         var family = nearest is not null && _catalogue.Catalogue.MaterialsById.TryGetValue(nearest.Id, out var near) ? near.Family : "NiZn";
         var slug = Slug(SaveName);
         var when = _time.GetUtcNow().ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
-        var provenance = string.Create(CultureInfo.InvariantCulture, $"Measured {when}: {Turns.Trim()} turns, {Inductance.Trim()} at {Frequency.Trim()}{(string.IsNullOrWhiteSpace(Quality) ? string.Empty : ", Q " + Quality.Trim())}; AL = L/N², μe = AL·C1/μ0 (IEC 62044-2 relations).");
+        var provenance = string.IsNullOrWhiteSpace(Inductance)
+            ? string.Create(CultureInfo.InvariantCulture, $"Measured {when}: {Turns.Trim()} turns, impedance sweep; μ from Z = jω·N²·(μ0/C1)·(μ′ − jμ″) (IEC 60401-3 notation).")
+            : string.Create(CultureInfo.InvariantCulture, $"Measured {when}: {Turns.Trim()} turns, {Inductance.Trim()} at {Frequency.Trim()}{(string.IsNullOrWhiteSpace(Quality) ? string.Empty : ", Q " + Quality.Trim())}; AL = L/N², μe = AL·C1/μ0 (IEC 62044-2 relations).");
         var material = new MaterialEntryDocument
         {
             Kind = "material",
@@ -140,7 +179,8 @@ public sealed class CharacterisationState
             Name = string.Create(CultureInfo.InvariantCulture, $"{family}, μi {intrinsicMu:0} ({SaveName.Trim()})"),
             Family = family,
             InitialPermeability = Math.Round(intrinsicMu, 6),
-            Source = provenance,
+            Permeability = table,
+            Source = provenance + (table is null ? string.Empty : string.Create(CultureInfo.InvariantCulture, $" μ′(f), μ″(f): Cole–Cole fit of {Impedances.Count} measured impedances (RMS residual {Result.Fit!.RmsRelativeResidual:P1}).")),
         };
         var materialResult = _catalogue.Store.Create(CatalogueEntryKind.Material, JsonSerializer.Serialize(material, CatalogueJson.Options));
         if (!materialResult.Succeeded)
