@@ -59,6 +59,18 @@ public sealed class EntryEditor
     /// <summary>Material: AL tolerance in percent as typed.</summary>
     public string AlTolerancePercent { get; set; } = string.Empty;
 
+    /// <summary>Material: B_sat at 25 °C in T as typed.</summary>
+    public string SaturationAt25C { get; set; } = string.Empty;
+
+    /// <summary>Material: B_sat at 100 °C in T as typed.</summary>
+    public string SaturationAt100C { get; set; } = string.Empty;
+
+    /// <summary>Material: Curie temperature in °C as typed.</summary>
+    public string CurieTemperature { get; set; } = string.Empty;
+
+    /// <summary>Material: resistivity in Ω·m as typed.</summary>
+    public string Resistivity { get; set; } = string.Empty;
+
     /// <summary>Core: the shape's dimension fields (name → text in mm), in the order the shape uses them.</summary>
     public IReadOnlyDictionary<string, string> Dimensions => _dimensions;
 
@@ -113,6 +125,10 @@ public sealed class EntryEditor
             Source = material.Source ?? string.Empty;
             InitialPermeability = material.InitialPermeability?.ToString("0.####", CultureInfo.InvariantCulture) ?? string.Empty;
             AlTolerancePercent = (material.AlTolerancePercent ?? 25).ToString("0.##", CultureInfo.InvariantCulture);
+            SaturationAt25C = Show(material.SaturationFluxDensityT?.At25C);
+            SaturationAt100C = Show(material.SaturationFluxDensityT?.At100C);
+            CurieTemperature = Show(material.CurieTemperatureC);
+            Resistivity = Show(material.ResistivityOhmM);
         }
 
         History = BuiltIn ? [] : _provider.Store.History(Kind, Id).Versions;
@@ -153,6 +169,11 @@ public sealed class EntryEditor
             material.Source = Source;
             material.InitialPermeability = Parse("initialPermeability", InitialPermeability);
             material.AlTolerancePercent = Parse("alTolerancePercent", AlTolerancePercent);
+            var at25 = Parse("saturationFluxDensityT.at25C", SaturationAt25C);
+            var at100 = Parse("saturationFluxDensityT.at100C", SaturationAt100C);
+            material.SaturationFluxDensityT = at25 is null && at100 is null ? null : new SaturationFluxDensityDocument { At25C = at25, At100C = at100 };
+            material.CurieTemperatureC = Parse("curieTemperatureC", CurieTemperature);
+            material.ResistivityOhmM = Parse("resistivityOhmM", Resistivity);
             json = JsonSerializer.Serialize(material, CatalogueJson.Options);
         }
 
@@ -235,6 +256,8 @@ public sealed class EntryEditor
 
         return Id + "-copy-" + Guid.NewGuid().ToString("N")[..6];
     }
+
+    private static string Show(double? value) => value?.ToString("G6", CultureInfo.InvariantCulture) ?? string.Empty;
 
     private double? Parse(string field, string text)
     {

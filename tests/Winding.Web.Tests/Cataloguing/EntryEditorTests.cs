@@ -78,6 +78,27 @@ public sealed class EntryEditorTests : IDisposable
     }
 
     [Fact]
+    public void MaterialForm_SaturationRisingWithTemperature_IsRefusedAtItsField()
+    {
+        // B_sat falls as the temperature rises (Snelling 1988, from memory): 100 °C above 25 °C is refused.
+        var id = new EntryEditor(_provider, CatalogueEntryKind.Material, "nizn-125").Clone("bench-ferrite", "NiZn, μi 125 (bench)");
+        var editor = new EntryEditor(_provider, CatalogueEntryKind.Material, id!);
+
+        editor.SaturationAt25C = "0.30";
+        editor.SaturationAt100C = "0.35";
+        editor.Save();
+
+        Assert.False(editor.Succeeded);
+        Assert.NotNull(editor.ErrorFor("saturationFluxDensityT.at100C"));
+
+        editor.SaturationAt100C = "0.25";
+        editor.CurieTemperature = "300";
+        editor.Save();
+        Assert.True(editor.Succeeded, editor.Message);
+        Assert.Equal(0.25, _provider.Catalogue.MaterialsById[id!].Material.Saturation!.At100CT, 1e-12);
+    }
+
+    [Fact]
     public void Delete_RemovesTheEntry()
     {
         var id = new EntryEditor(_provider, CatalogueEntryKind.Material, "nizn-125").Clone("bench-mix", "NiZn, μi 125 (bench)");
