@@ -3,6 +3,10 @@ namespace Winding.Catalogue.Entries;
 /// <summary>The JSON form of a core catalogue entry (<c>"kind": "core"</c>), one per file.</summary>
 public sealed class CoreEntryDocument
 {
+    /// <summary>Optional link to this kind's JSON Schema (<c>cores/schemas/core.schema.json</c>) so that editors validate the file.</summary>
+    [System.Text.Json.Serialization.JsonPropertyName("$schema")]
+    public string? Schema { get; set; }
+
     /// <summary>Always <c>core</c>.</summary>
     public string? Kind { get; set; }
 

@@ -7,6 +7,10 @@ namespace Winding.Catalogue.Entries;
 /// </summary>
 public sealed class MaterialEntryDocument
 {
+    /// <summary>Optional link to this kind's JSON Schema (<c>cores/schemas/material.schema.json</c>) so that editors validate the file.</summary>
+    [System.Text.Json.Serialization.JsonPropertyName("$schema")]
+    public string? Schema { get; set; }
+
     /// <summary>Always <c>material</c>.</summary>
     public string? Kind { get; set; }
 

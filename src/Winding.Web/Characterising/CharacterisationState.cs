@@ -81,6 +81,40 @@ public sealed class CharacterisationState
         FileMessage = string.Create(CultureInfo.InvariantCulture, $"{fileName}: {Impedances.Count} points from {EngineeringFormat.Format(Impedances[0].FrequencyHz ?? 0, "Hz")} to {EngineeringFormat.Format(Impedances[^1].FrequencyHz ?? 0, "Hz")}.");
     }
 
+    /// <summary>
+    /// Reads impedances typed one per line as "frequency  R  X" (SI prefixes allowed, e.g. "1M 0.75 43.55"); blank lines
+    /// and lines starting with '!' or '#' are skipped. A bad line is reported with its number.
+    /// </summary>
+    public void LoadTypedImpedances(string text)
+    {
+        var points = new List<ImpedancePointDocument>();
+        var lines = (text ?? string.Empty).Split('\n');
+        for (var i = 0; i < lines.Length; i++)
+        {
+            var line = lines[i].Trim();
+            if (line.Length == 0 || line.StartsWith('!') || line.StartsWith('#'))
+            {
+                continue;
+            }
+
+            var parts = line.Split([' ', '\t', ';'], StringSplitOptions.RemoveEmptyEntries);
+            var f = parts.Length == 3 ? EngineeringNumber.TryParse(parts[0], "Hz") : null;
+            var r = parts.Length == 3 ? EngineeringNumber.TryParse(parts[1], "Ω") : null;
+            var x = parts.Length == 3 ? EngineeringNumber.TryParse(parts[2], "Ω") : null;
+            if (f is null || r is null || x is null || !(f > 0))
+            {
+                Impedances = [];
+                FileMessage = string.Create(CultureInfo.InvariantCulture, $"Line {i + 1}: write three numbers, frequency, R and X (e.g. 1M 0.75 43.55).");
+                return;
+            }
+
+            points.Add(new ImpedancePointDocument { FrequencyHz = f, Re = r, Im = x });
+        }
+
+        Impedances = [.. points.OrderBy(p => p.FrequencyHz)];
+        FileMessage = string.Create(CultureInfo.InvariantCulture, $"{Impedances.Count} typed points.");
+    }
+
     /// <summary>The latest characterisation.</summary>
     public CharacterisationResult? Result { get; private set; }
 

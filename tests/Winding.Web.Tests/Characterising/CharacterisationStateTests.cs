@@ -67,6 +67,20 @@ public sealed class CharacterisationStateTests : IDisposable
     }
 
     [Fact]
+    public void TypedImpedances_AreReadWithSiPrefixes()
+    {
+        // physics-sources.md §12 impedances typed in: 10 MHz 139.4 + j348.4 Ω → μs′ 99.996 (N = 10, ring 10/5/4 mm).
+        _state.LoadTypedImpedances("! f R X\n1M 0.75 43.55\n10M 139.4 348.4\n100M 2090 697\n");
+        _state.Characterise();
+
+        Assert.Equal(3, _state.Impedances.Count);
+        Assert.Equal(99.996, _state.Result!.MeasuredPermeability[1].MuPrime, 99.996 * 1e-4);
+
+        _state.LoadTypedImpedances("1M 0.75\n");
+        Assert.Contains("Line 1", _state.FileMessage, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void MalformedTouchstone_IsRefusedWithItsLineNumber()
     {
         _state.LoadTouchstone("bad.s1p", "# MHz Z RI R 1\n1 0.75 43.55\n2 x 5\n");
