@@ -126,14 +126,14 @@ public static class OperatingAnalysis
             {
                 warnings.Add(new PlanWarning(
                     WarningCodes.WireThickerThanSkinDepth, WarningSeverity.Caution, $"windings[{i}].wire",
-                    Text($"Winding '{spec.Name}': each conductor is {factor.SkinDepthRatio:0.#} skin depths thick at {Hz(op.MaxFrequencyHz)} (δ = {factor.SkinDepth.Millimetres:0.###} mm); above about 2 the extra copper carries little current. Consider several thinner strands in hand or Litz.")));
+                    FrequencyText.Text($"Winding '{spec.Name}': each conductor is {factor.SkinDepthRatio:0.#} skin depths thick at {FrequencyText.Hz(op.MaxFrequencyHz)} (δ = {factor.SkinDepth.Millimetres:0.###} mm); above about 2 the extra copper carries little current. Consider several thinner strands in hand or Litz.")));
             }
 
             if (density > CurrentDensityLimitAPerM2)
             {
                 warnings.Add(new PlanWarning(
                     WarningCodes.CurrentDensityHigh, WarningSeverity.Caution, $"windings[{i}].wire",
-                    Text($"Winding '{spec.Name}' carries {density / 1e6:0.#} A/mm² ({currentA:0.###} A); above about 4 A/mm² a small naturally cooled winding runs hot. Use thicker wire or more strands.")));
+                    FrequencyText.Text($"Winding '{spec.Name}' carries {density / 1e6:0.#} A/mm² ({currentA:0.###} A); above about 4 A/mm² a small naturally cooled winding runs hot. Use thicker wire or more strands.")));
             }
         }
 
@@ -225,20 +225,20 @@ public static class OperatingAnalysis
         {
             warnings.Add(new PlanWarning(
                 WarningCodes.LowReactance, branch.ReactanceOhm < branch.ImpedanceSeenOhm ? WarningSeverity.Error : WarningSeverity.Caution, "windings[0].turns",
-                Text($"Too little reactance at {Hz(op.MinFrequencyHz)}: the primary's {branch.ReactanceOhm:0.#} Ω is under {branch.ReactanceFactor:0.##} × {branch.ImpedanceSeenOhm:0.#} Ω = {needed:0.#} Ω, so the bottom of the band is lost. About {branch.PrimaryTurnsNeeded} primary turns meet it even at the low end of the AL tolerance.")));
+                FrequencyText.Text($"Too little reactance at {FrequencyText.Hz(op.MinFrequencyHz)}: the primary's {branch.ReactanceOhm:0.#} Ω is under {branch.ReactanceFactor:0.##} × {branch.ImpedanceSeenOhm:0.#} Ω = {needed:0.#} Ω, so the bottom of the band is lost. About {branch.PrimaryTurnsNeeded} primary turns meet it even at the low end of the AL tolerance.")));
         }
         else if (plan.Windings[0].Turns < branch.PrimaryTurnsNeeded)
         {
             warnings.Add(new PlanWarning(
                 WarningCodes.LowReactance, WarningSeverity.Info, "windings[0].turns",
-                Text($"The primary meets X ≥ {branch.ReactanceFactor:0.##}·Z at {Hz(op.MinFrequencyHz)} with the nominal AL, but not at the low end of its ±{material.AlTolerance * 100:0} % tolerance; {branch.PrimaryTurnsNeeded} turns would.")));
+                FrequencyText.Text($"The primary meets X ≥ {branch.ReactanceFactor:0.##}·Z at {FrequencyText.Hz(op.MinFrequencyHz)} with the nominal AL, but not at the low end of its ±{material.AlTolerance * 100:0} % tolerance; {branch.PrimaryTurnsNeeded} turns would.")));
         }
 
         if (branch.PermeabilityExtrapolated)
         {
             warnings.Add(new PlanWarning(
                 WarningCodes.PermeabilityExtrapolated, WarningSeverity.Info, "operating.minFrequencyHz",
-                Text($"{Hz(op.MinFrequencyHz)} lies outside the material's permeability table; its end value was used.")));
+                FrequencyText.Text($"{FrequencyText.Hz(op.MinFrequencyHz)} lies outside the material's permeability table; its end value was used.")));
         }
 
         if (point.SaturationFluxDensityT is { } bsat)
@@ -247,13 +247,13 @@ public static class OperatingAnalysis
             {
                 warnings.Add(new PlanWarning(
                     WarningCodes.FluxAboveLimit, WarningSeverity.Error, "operating.driveVoltageRms",
-                    Text($"The core saturates: B̂ = {point.PeakFluxDensityT * 1e3:0.#} mT at {Hz(point.FluxFrequencyHz)} reaches B_sat = {bsat * 1e3:0} mT at {point.HotTemperatureC:0} °C. Add turns, use a larger core or lower the drive.")));
+                    FrequencyText.Text($"The core saturates: B̂ = {point.PeakFluxDensityT * 1e3:0.#} mT at {FrequencyText.Hz(point.FluxFrequencyHz)} reaches B_sat = {bsat * 1e3:0} mT at {point.HotTemperatureC:0} °C. Add turns, use a larger core or lower the drive.")));
             }
             else if (point.PeakFluxDensityT >= NearSaturationShare * bsat)
             {
                 warnings.Add(new PlanWarning(
                     WarningCodes.NearSaturation, WarningSeverity.Caution, "operating.driveVoltageRms",
-                    Text($"Near saturation: B̂ = {point.PeakFluxDensityT * 1e3:0.#} mT is {point.PeakFluxDensityT / bsat * 100:0} % of B_sat ({bsat * 1e3:0} mT at {point.HotTemperatureC:0} °C).")));
+                    FrequencyText.Text($"Near saturation: B̂ = {point.PeakFluxDensityT * 1e3:0.#} mT is {point.PeakFluxDensityT / bsat * 100:0} % of B_sat ({bsat * 1e3:0} mT at {point.HotTemperatureC:0} °C).")));
             }
         }
         else
@@ -281,20 +281,20 @@ public static class OperatingAnalysis
         {
             warnings.Add(new PlanWarning(
                 WarningCodes.Hot, WarningSeverity.Error, "operating",
-                Text($"Too hot: about {point.HotTemperatureC:0} °C ({point.TemperatureRiseK:0} K rise from {point.TotalLossW:0.###} W), at or above {hotLimitC:0} °C (insulation class or 20 K below the Curie temperature). Reduce the loss or use a larger core.")));
+                FrequencyText.Text($"Too hot: about {point.HotTemperatureC:0} °C ({point.TemperatureRiseK:0} K rise from {point.TotalLossW:0.###} W), at or above {hotLimitC:0} °C (insulation class or 20 K below the Curie temperature). Reduce the loss or use a larger core.")));
         }
         else if (point.HotTemperatureC > TouchTemperatureC)
         {
             warnings.Add(new PlanWarning(
                 WarningCodes.Hot, WarningSeverity.Caution, "operating",
-                Text($"Hot: about {point.HotTemperatureC:0} °C ({point.TemperatureRiseK:0} K rise from {point.TotalLossW:0.###} W). Above about {TouchTemperatureC:0} °C a surface burns to the touch; keep it guarded and ventilated.")));
+                FrequencyText.Text($"Hot: about {point.HotTemperatureC:0} °C ({point.TemperatureRiseK:0} K rise from {point.TotalLossW:0.###} W). Above about {TouchTemperatureC:0} °C a surface burns to the touch; keep it guarded and ventilated.")));
         }
 
         if (material.AlTolerance >= 0.2)
         {
             warnings.Add(new PlanWarning(
                 WarningCodes.WideAlTolerance, WarningSeverity.Info, "core",
-                Text($"AL has a tolerance of ±{material.AlTolerance * 100:0} %: every inductance may be that far off. Measure the finished winding.")));
+                FrequencyText.Text($"AL has a tolerance of ±{material.AlTolerance * 100:0} %: every inductance may be that far off. Measure the finished winding.")));
         }
 
         var pulse = op.Waveform.Shape == WaveformShape.Pulse;
@@ -306,7 +306,7 @@ public static class OperatingAnalysis
             {
                 warnings.Add(new PlanWarning(
                     WarningCodes.AboveExtraLowVoltage, WarningSeverity.Caution, $"windings[{i}]",
-                    Text($"Winding '{plan.Windings[i].Name}' works at about {(pulse ? peak : volts):0} V{(pulse ? " peak" : " RMS")}, above the extra-low-voltage band ({(pulse ? "120 V ripple-free DC" : "50 V AC")}). Insulation, creepage and isolation must follow the applicable safety standard and your local codes; defer to licensed practice.")));
+                    FrequencyText.Text($"Winding '{plan.Windings[i].Name}' works at about {(pulse ? peak : volts):0} V{(pulse ? " peak" : " RMS")}, above the extra-low-voltage band ({(pulse ? "120 V ripple-free DC" : "50 V AC")}). Insulation, creepage and isolation must follow the applicable safety standard and your local codes; defer to licensed practice.")));
             }
         }
 
@@ -315,16 +315,8 @@ public static class OperatingAnalysis
         {
             warnings.Add(new PlanWarning(
                 WarningCodes.HighPower, WarningSeverity.Caution, "operating.driveVoltageRms",
-                Text($"About {powerW:0} W of RF passes through this transformer: RF burns are possible and exposure limits apply near antennas. Follow your licence conditions and local rules.")));
+                FrequencyText.Text($"About {powerW:0} W of RF passes through this transformer: RF burns are possible and exposure limits apply near antennas. Follow your licence conditions and local rules.")));
         }
     }
 
-    private static string Hz(double frequencyHz) => frequencyHz switch
-    {
-        >= 1e6 => Text($"{frequencyHz / 1e6:0.###} MHz"),
-        >= 1e3 => Text($"{frequencyHz / 1e3:0.###} kHz"),
-        _ => Text($"{frequencyHz:0.###} Hz"),
-    };
-
-    private static string Text(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

@@ -72,7 +72,7 @@ public static class ParasiticEstimator
             }
             else
             {
-                (capacitanceF, method) = SelfCapacitance(spec, fits[i], shape, conductive, ArcOf(plan, i));
+                (capacitanceF, method) = SelfCapacitance(spec, fits[i], shape, conductive, PlacementRegion.ArcDegrees(plan.Windings, i));
             }
 
             selfCaps.Add(capacitanceF);
@@ -168,8 +168,8 @@ public static class ParasiticEstimator
             var (w, h, meanCircumferenceM) = RingSection(shape);
             var a1 = Enclosed(w, h, f1.BuildBelowM + f1.BuildThicknessM / 2);
             var a2 = Enclosed(w, h, f2.BuildBelowM + f2.BuildThicknessM / 2);
-            var arc1 = meanCircumferenceM * ArcOf(plan, 0) / 360;
-            var arc2 = meanCircumferenceM * ArcOf(plan, last) / 360;
+            var arc1 = meanCircumferenceM * PlacementRegion.ArcDegrees(plan.Windings, 0) / 360;
+            var arc2 = meanCircumferenceM * PlacementRegion.ArcDegrees(plan.Windings, last) / 360;
             return (LeakageInductance.SectoredEstimateH(first.Turns, a1, arc1, second.Turns, a2, arc2),
                 "side-by-side sectors: air-cored inductance of each sector (a derived estimate, within a factor of about 3; measure it)");
         }
@@ -298,37 +298,13 @@ public static class ParasiticEstimator
 
     private static double Enclosed(double w, double h, double t) => (w + 2 * t) * (h + 2 * t);
 
-    private static double ArcOf(TransformerPlan plan, int index)
-    {
-        var p = plan.Windings[index].Placement;
-        var guard = 0;
-        while (p.Kind is PlacementKind.Over or PlacementKind.Bifilar && guard++ < plan.Windings.Count)
-        {
-            p = plan.Windings[p.OtherWinding].Placement;
-        }
-
-        return p.Kind == PlacementKind.Sector ? p.ArcDegrees : 360;
-    }
-
     /// <summary>The share of the circumference both windings cover (1 when both are spread).</summary>
     private static double OverlapFraction(TransformerPlan plan, int a, int b)
     {
-        var (s1, e1) = Region(plan, a);
-        var (s2, e2) = Region(plan, b);
+        var (s1, e1) = PlacementRegion.Of(plan.Windings, a);
+        var (s2, e2) = PlacementRegion.Of(plan.Windings, b);
         var overlap = Math.Max(0, Math.Min(e1, e2) - Math.Max(s1, s2));
         return overlap / 360;
-    }
-
-    private static (double Start, double End) Region(TransformerPlan plan, int index)
-    {
-        var p = plan.Windings[index].Placement;
-        var guard = 0;
-        while (p.Kind is PlacementKind.Over or PlacementKind.Bifilar && guard++ < plan.Windings.Count)
-        {
-            p = plan.Windings[p.OtherWinding].Placement;
-        }
-
-        return p.Kind == PlacementKind.Sector ? (p.StartDegrees, p.EndDegrees) : (0, 360);
     }
 
     private static string Text(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);

@@ -194,23 +194,23 @@ public static class ResponseAnalysis
         if (band.LowerCutoffHz is { } lower3 && lower3 > op.MinFrequencyHz)
         {
             warnings.Add(new PlanWarning(WarningCodes.BandEdgeInsideBand, WarningSeverity.Error, "operating.minFrequencyHz",
-                Text($"The response is 3 dB down at {Hz(lower3)}, above the band's bottom ({Hz(op.MinFrequencyHz)}): more primary turns or a higher-permeability core.")));
+                FrequencyText.Text($"The response is 3 dB down at {FrequencyText.Hz(lower3)}, above the band's bottom ({FrequencyText.Hz(op.MinFrequencyHz)}): more primary turns or a higher-permeability core.")));
         }
         else if (band.Lower1DbHz is { } lower1 && lower1 > op.MinFrequencyHz)
         {
             warnings.Add(new PlanWarning(WarningCodes.BandEdgeInsideBand, WarningSeverity.Caution, "operating.minFrequencyHz",
-                Text($"The response is 1 dB down at {Hz(lower1)}, above the band's bottom ({Hz(op.MinFrequencyHz)}).")));
+                FrequencyText.Text($"The response is 1 dB down at {FrequencyText.Hz(lower1)}, above the band's bottom ({FrequencyText.Hz(op.MinFrequencyHz)}).")));
         }
 
         if (band.UpperCutoffHz is { } upper3 && upper3 < op.MaxFrequencyHz)
         {
             warnings.Add(new PlanWarning(WarningCodes.BandEdgeInsideBand, WarningSeverity.Error, "operating.maxFrequencyHz",
-                Text($"The response is 3 dB down at {Hz(upper3)}, below the band's top ({Hz(op.MaxFrequencyHz)}): fewer turns, windings closer together (less leakage) or less capacitance.")));
+                FrequencyText.Text($"The response is 3 dB down at {FrequencyText.Hz(upper3)}, below the band's top ({FrequencyText.Hz(op.MaxFrequencyHz)}): fewer turns, windings closer together (less leakage) or less capacitance.")));
         }
         else if (band.Upper1DbHz is { } upper1 && upper1 < op.MaxFrequencyHz)
         {
             warnings.Add(new PlanWarning(WarningCodes.BandEdgeInsideBand, WarningSeverity.Caution, "operating.maxFrequencyHz",
-                Text($"The response is 1 dB down at {Hz(upper1)}, below the band's top ({Hz(op.MaxFrequencyHz)}).")));
+                FrequencyText.Text($"The response is 1 dB down at {FrequencyText.Hz(upper1)}, below the band's top ({FrequencyText.Hz(op.MaxFrequencyHz)}).")));
         }
 
         for (var i = 0; i < parasitics.SelfResonancesHz.Count; i++)
@@ -218,30 +218,22 @@ public static class ResponseAnalysis
             if (parasitics.SelfResonancesHz[i] is { } srf && srf >= op.MinFrequencyHz && srf <= op.MaxFrequencyHz)
             {
                 warnings.Add(new PlanWarning(WarningCodes.SelfResonanceInBand, WarningSeverity.Caution, $"windings[{i}].turns",
-                    Text($"Winding '{plan.Windings[i].Name}' resonates with its own capacitance at about {Hz(srf)}, inside the band. Fewer turns or a single layer raise it.")));
+                    FrequencyText.Text($"Winding '{plan.Windings[i].Name}' resonates with its own capacitance at about {FrequencyText.Hz(srf)}, inside the band. Fewer turns or a single layer raise it.")));
             }
         }
 
         if (parasitics.TransformerSelfResonanceHz is { } transformer && transformer >= op.MinFrequencyHz && transformer <= op.MaxFrequencyHz)
         {
             warnings.Add(new PlanWarning(WarningCodes.SelfResonanceInBand, WarningSeverity.Caution, "windings[0].turns",
-                Text($"The transformer seen from the primary resonates at about {Hz(transformer)}, inside the band.")));
+                FrequencyText.Text($"The transformer seen from the primary resonates at about {FrequencyText.Hz(transformer)}, inside the band.")));
         }
 
         var worst = sweep.Where(p => p.FrequencyHz >= op.MinFrequencyHz && p.FrequencyHz <= op.MaxFrequencyHz).DefaultIfEmpty().MinBy(p => p.ReturnLossDb);
         if (worst.FrequencyHz > 0 && worst.ReturnLossDb < ReturnLossLimitDb)
         {
             warnings.Add(new PlanWarning(WarningCodes.PoorReturnLoss, WarningSeverity.Caution, "operating",
-                Text($"Return loss at the primary falls to {worst.ReturnLossDb:0.#} dB at {Hz(worst.FrequencyHz)}, worse than {ReturnLossLimitDb:0} dB (SWR about 1.9): the primary does not present its source's impedance there.")));
+                FrequencyText.Text($"Return loss at the primary falls to {worst.ReturnLossDb:0.#} dB at {FrequencyText.Hz(worst.FrequencyHz)}, worse than {ReturnLossLimitDb:0} dB (SWR about 1.9): the primary does not present its source's impedance there.")));
         }
     }
 
-    private static string Hz(double frequencyHz) => frequencyHz switch
-    {
-        >= 1e6 => Text($"{frequencyHz / 1e6:0.###} MHz"),
-        >= 1e3 => Text($"{frequencyHz / 1e3:0.###} kHz"),
-        _ => Text($"{frequencyHz:0.###} Hz"),
-    };
-
-    private static string Text(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

@@ -65,7 +65,7 @@ public static class WindingLayout
                 continue;
             }
 
-            var (start, end) = RegionOf(windings, i);
+            var (start, end) = PlacementRegion.Of(windings, i);
             var below = coatingM;
             foreach (var region in regions.Where(r => r.Start < end && start < r.End))
             {
@@ -210,19 +210,6 @@ public static class WindingLayout
         }
 
         return fits;
-    }
-
-    private static (double Start, double End) RegionOf(IReadOnlyList<WindingSpec> windings, int index)
-    {
-        var placement = windings[index].Placement;
-        var guard = 0;
-        while (placement.Kind is PlacementKind.Over or PlacementKind.Bifilar && placement.OtherWinding != index && guard++ < windings.Count)
-        {
-            index = placement.OtherWinding;
-            placement = windings[index].Placement;
-        }
-
-        return placement.Kind == PlacementKind.Sector ? (placement.StartDegrees, placement.EndDegrees) : (0, 360);
     }
 
     /// <summary>The winding and any later windings wound bifilar with it.</summary>
