@@ -78,7 +78,9 @@ public static class OperatingAnalysis
         var magnetizing = WindingImpedance.Calculate(primary.Turns, effective, op.MinFrequencyHz, muPrime, muDoublePrime);
         var n = (double)last.Turns / primary.Turns;
         var reflectedLoadOhm = plan.Windings.Count > 1 ? op.LoadResistanceOhm / (n * n) : op.LoadResistanceOhm;
-        var seenOhm = Math.Max(op.SourceResistanceOhm, reflectedLoadOhm);
+        var seenOhm = op.SourceResistanceOhm > 0
+            ? 2 * op.SourceResistanceOhm * reflectedLoadOhm / (op.SourceResistanceOhm + reflectedLoadOhm)
+            : reflectedLoadOhm;
         var alAtFmin = InductanceFactor.FromHenriesPerTurnSquared(PhysicalConstants.VacuumPermeabilityHPerM * muPrime / effective.CoreFactorC1PerM);
         var turnsNeeded = TurnsSolver.ForReactance(alAtFmin, op.MinFrequencyHz, seenOhm, op.ReactanceFactor, material.AlTolerance);
         var branch = new MagnetizingBranch(op.MinFrequencyHz, magnetizing.SeriesInductanceH, magnetizing.SeriesReactanceOhm, magnetizing.SeriesResistanceOhm, magnetizing.ParallelResistanceOhm, seenOhm, op.ReactanceFactor, turnsNeeded, extrapolated);

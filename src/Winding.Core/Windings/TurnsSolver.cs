@@ -7,7 +7,7 @@ namespace Winding.Core.Windings;
 /// </summary>
 public static class TurnsSolver
 {
-    /// <summary>Turns for at least <paramref name="inductanceH"/>: N = ⌈√(L / (AL·(1 − t)))⌉.</summary>
+    /// <summary>Turns for at least <paramref name="inductanceH"/>: N = ⌈√(L / (AL·(1 − t)))⌉, at least one turn.</summary>
     /// <param name="al">AL of the core.</param>
     /// <param name="inductanceH">Target inductance, H, positive.</param>
     /// <param name="alTolerance">AL tolerance as a fraction, 0 ≤ t &lt; 1 (0 for the nominal AL).</param>
@@ -24,7 +24,7 @@ public static class TurnsSolver
         }
 
         var exact = Math.Sqrt(inductanceH / (al.HenriesPerTurnSquared * (1 - alTolerance)));
-        return (int)Math.Min(int.MaxValue, Math.Ceiling(exact - 1e-9));
+        return (int)Math.Clamp(Math.Ceiling(exact - 1e-9), 1, int.MaxValue);
     }
 
     /// <summary>

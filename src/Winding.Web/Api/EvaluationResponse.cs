@@ -77,7 +77,7 @@ public sealed record RangeResponse(double? Min, double? Max);
 /// <param name="ReactanceOhm">2π·f·L_m, Ω.</param>
 /// <param name="SeriesLossResistanceOhm">Core-loss resistance in series with the magnetising inductance at minFrequencyHz, Ω.</param>
 /// <param name="ParallelLossResistanceOhm">The same loss as a resistance across the primary, Ω (null without μ″).</param>
-/// <param name="ImpedanceSeenOhm">The larger of the source resistance and the reflected load, Ω.</param>
+/// <param name="ImpedanceSeenOhm">2·(RS ∥ RL′), the impedance the magnetising inductance works against (R when matched; RL′ with RS = 0), Ω.</param>
 /// <param name="ReactanceFactor">k.</param>
 /// <param name="PrimaryTurnsNeeded">Primary turns meeting the rule at the low end of the AL tolerance.</param>
 public sealed record MagnetizingResponse(double FrequencyHz, double ReactanceOhm, double SeriesLossResistanceOhm, double? ParallelLossResistanceOhm, double ImpedanceSeenOhm, double ReactanceFactor, int PrimaryTurnsNeeded);

@@ -95,7 +95,7 @@ public static class ResultRows
         if (evaluation.Magnetizing is { } m)
         {
             rows.Add(new("magnetizing", "Magnetising inductance (f min)", EngineeringFormat.Format(m.InductanceH, "H"), "The primary's series inductance at the bottom of the band, from μ′(f)."));
-            rows.Add(new("reactance", "Reactance (f min)", Fixed(m.ReactanceOhm, 1) + " Ω against " + Fixed(m.ReactanceFactor * m.ImpedanceSeenOhm, 1) + " Ω wanted", $"X = 2π·f·L; the rule X ≥ {m.ReactanceFactor:0.##}·Z with Z the larger of the source and the reflected load (common practice)."));
+            rows.Add(new("reactance", "Reactance (f min)", Fixed(m.ReactanceOhm, 1) + " Ω against " + Fixed(m.ReactanceFactor * m.ImpedanceSeenOhm, 1) + " Ω wanted", $"X = 2π·f·L; the rule X ≥ {m.ReactanceFactor:0.##}·Z with Z = 2·(RS ∥ RL′), which is R when matched (common practice)."));
             rows.Add(new("core-loss-resistance", "Core-loss resistance (f min)", EngineeringFormat.Format(m.SeriesLossResistanceOhm, "Ω") + " in series" + (m.ParallelLossResistanceOhm is { } rp ? " · " + EngineeringFormat.Format(rp, "Ω") + " across" : string.Empty), "ω·L0·μ″: the core's loss as a resistance in series with L, and as a resistance across the winding (IEC 60401-3 notation)."));
             rows.Add(new("turns-needed", "Primary turns for the band", m.PrimaryTurnsNeeded.ToString(CultureInfo.InvariantCulture), "Turns meeting X ≥ k·Z even at the low end of the AL tolerance."));
         }
