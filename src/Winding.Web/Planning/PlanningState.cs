@@ -1,3 +1,4 @@
+using System.Globalization;
 using Winding.Catalogue.Entries;
 using Winding.Catalogue.Plans;
 using Winding.Catalogue.Validation;
@@ -23,6 +24,7 @@ public sealed class PlanningState
     private readonly Dictionary<string, string> _errors = new(StringComparer.Ordinal);
     private readonly List<WindingDraft> _windings = [];
     private readonly Dictionary<int, WireChoiceReport> _suggestions = [];
+    private PlanDocument? _loaded;
 
     /// <summary>Creates the state with a mid-size ring core and a primary and a secondary.</summary>
     public PlanningState(CatalogueProvider catalogue)
@@ -155,6 +157,69 @@ public sealed class PlanningState
         });
     }
 
+    /// <summary>The plan's name (from a loaded plan, or empty).</summary>
+    public string PlanName { get; private set; } = string.Empty;
+
+    /// <summary>
+    /// Loads a plan document into the form: its catalogue core, windings, operating conditions; what the form does not
+    /// edit (inline cores, stacks, placements, wraps, taps, special wires, sweep, options, measured values) is kept as is.
+    /// </summary>
+    public void Load(PlanDocument document)
+    {
+        ArgumentNullException.ThrowIfNull(document);
+        PlanName = document.Name ?? string.Empty;
+        _loaded = document;
+        CoreId = document.Core?.CatalogueId;
+        _windings.Clear();
+        foreach (var w in document.Windings ?? [])
+        {
+            if (w is null)
+            {
+                continue;
+            }
+
+            var wire = w.Wire;
+            var custom = wire is { ConductorDiameterMm: not null, Litz: null, HookUp: null };
+            _windings.Add(new WindingDraft
+            {
+                Name = w.Name ?? string.Empty,
+                Turns = w.Turns?.ToString(CultureInfo.InvariantCulture) ?? string.Empty,
+                StandardId = wire?.StandardId,
+                ConductorDiameter = custom ? Show(wire!.ConductorDiameterMm) : string.Empty,
+                OverallDiameter = custom ? Show(wire!.OverallDiameterMm) : string.Empty,
+                StrandsInHand = wire?.StrandsInHand?.ToString(CultureInfo.InvariantCulture) ?? string.Empty,
+                RmsCurrent = Show(w.RmsCurrentA),
+                ImportedWire = wire is not null && wire.StandardId is null && !custom ? wire : null,
+                Placement = w.Placement,
+                Insulation = w.Insulation,
+                Taps = w.Taps,
+                TargetInductanceH = w.TargetInductanceH,
+            });
+        }
+
+        if (document.Operating is { } op)
+        {
+            Operating.Enabled = true;
+            Operating.MinFrequency = Show(op.MinFrequencyHz);
+            Operating.MaxFrequency = Show(op.MaxFrequencyHz);
+            Operating.SourceResistance = Show(op.SourceResistanceOhm);
+            Operating.LoadResistance = Show(op.LoadResistanceOhm);
+            Operating.DriveVoltage = Show(op.DriveVoltageRms);
+            Operating.Waveform = op.Waveform ?? "sine";
+            Operating.DutyCycle = op.DutyCycle is null ? "0.5" : Show(op.DutyCycle);
+            Operating.AmbientTemperature = op.AmbientTemperatureC is null ? "25" : Show(op.AmbientTemperatureC);
+        }
+        else
+        {
+            Operating.Enabled = false;
+        }
+
+        _suggestions.Clear();
+        Recalculate();
+    }
+
+    private static string Show(double? value) => value?.ToString("G6", CultureInfo.InvariantCulture) ?? string.Empty;
+
     /// <summary>The plan document for the current inputs (what the API would be sent).</summary>
     public PlanDocument ToDocument()
     {
@@ -210,7 +275,11 @@ public sealed class PlanningState
             var draft = _windings[i];
             var prefix = $"windings[{i}]";
             var wire = new PlanWireDocument { StrandsInHand = Whole(errors, $"{prefix}.wire.strandsInHand", draft.StrandsInHand, "Wires in hand", required: false) };
-            if (draft.StandardId is not null)
+            if (draft.ImportedWire is { } imported)
+            {
+                wire = imported;
+            }
+            else if (draft.StandardId is not null)
             {
                 wire.StandardId = draft.StandardId;
             }
@@ -226,6 +295,10 @@ public sealed class PlanningState
                 Turns = Whole(errors, $"{prefix}.turns", draft.Turns, "Turns", required: true),
                 Wire = wire,
                 RmsCurrentA = Number(errors, $"{prefix}.rmsCurrentA", draft.RmsCurrent, "RMS current", "A", required: false),
+                Placement = draft.Placement,
+                Insulation = draft.Insulation,
+                Taps = draft.Taps,
+                TargetInductanceH = draft.TargetInductanceH,
             });
         }
 
@@ -245,11 +318,19 @@ public sealed class PlanningState
             };
         }
 
+        var loadedCore = _loaded?.Core;
         return new PlanDocument
         {
-            Core = new PlanCoreDocument { CatalogueId = CoreId },
+            Name = string.IsNullOrWhiteSpace(PlanName) ? null : PlanName,
+            Core = loadedCore is not null && loadedCore.CatalogueId == CoreId
+                ? loadedCore
+                : new PlanCoreDocument { CatalogueId = CoreId, Stack = loadedCore?.Stack },
             Windings = windings,
             Operating = operating,
+            Allowance = _loaded?.Allowance,
+            Sweep = _loaded?.Sweep,
+            Options = _loaded?.Options,
+            Measured = _loaded?.Measured,
         };
     }
 

@@ -23,4 +23,19 @@ public sealed class WindingDraft
 
     /// <summary>RMS current in A as typed (empty: derived from drive and load).</summary>
     public string RmsCurrent { get; set; } = string.Empty;
+
+    /// <summary>A wire from a loaded plan in a form the page does not edit (metric size, AWG, Litz, hook-up…), kept as is.</summary>
+    public Winding.Catalogue.Plans.PlanWireDocument? ImportedWire { get; set; }
+
+    /// <summary>Placement from a loaded plan (kept as is; spread when null).</summary>
+    public Winding.Catalogue.Plans.PlanPlacementDocument? Placement { get; set; }
+
+    /// <summary>Insulation wrap from a loaded plan (kept as is).</summary>
+    public Winding.Catalogue.Plans.PlanInsulationDocument? Insulation { get; set; }
+
+    /// <summary>Taps from a loaded plan (kept as is).</summary>
+    public List<int>? Taps { get; set; }
+
+    /// <summary>Target inductance from a loaded plan (kept as is).</summary>
+    public double? TargetInductanceH { get; set; }
 }
