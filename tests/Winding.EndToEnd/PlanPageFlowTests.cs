@@ -16,7 +16,7 @@ public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
     public async Task PickCore_TypeTurns_InductanceFollowsTheApi()
     {
         await using var session = await BrowserSession.StartAsync();
-        var page = await session.OpenInteractiveAsync(_server.BaseAddress);
+        var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/plan"));
 
         await page.GetByRole(AriaRole.Combobox).First.ClickAsync();
         await page.GetByRole(AriaRole.Option, new PageGetByRoleOptions { Name = "Toroid 36 × 23 × 15 mm · NiZn, μi 125" }).ClickAsync();
@@ -35,7 +35,7 @@ public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
     public async Task NonsenseTurns_ShowAFieldError_AndTheAppKeepsWorking()
     {
         await using var session = await BrowserSession.StartAsync();
-        var page = await session.OpenInteractiveAsync(_server.BaseAddress);
+        var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/plan"));
 
         await page.Locator("#windings-0-turns").FillAsync("twelve");
 
@@ -59,5 +59,29 @@ public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
         response.EnsureSuccessStatusCode();
         using var json = JsonDocument.Parse(await response.Content.ReadAsStringAsync());
         return EngineeringFormat.Format(json.RootElement.GetProperty("windings")[0].GetProperty("inductanceH").GetDouble(), "H");
+    }
+
+    [SkippableFact]
+    public async Task OpenADemo_ChangeTurns_FitDrawingAndResultsFollow_SaveAndReload()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        var page = await session.OpenInteractiveAsync(_server.BaseAddress);
+        await page.GetByTestId("demo-club-long-wire-receive").ClickAsync();
+        await Assertions.Expect(page.Locator("#windings-0-turns")).ToHaveValueAsync("12");
+        var layers = page.Locator("[data-testid=value-w0-turns-per-layer]");
+        await Assertions.Expect(page.GetByTestId("cross-section-svg")).ToBeVisibleAsync();
+
+        await page.Locator("#windings-0-turns").FillAsync("40");
+
+        await Assertions.Expect(layers).ToContainTextAsync("40");
+        await page.Locator("#plan-name").FillAsync("Long-wire receive, 40 turns");
+        await page.GetByTestId("save-plan").ClickAsync();
+        await Assertions.Expect(page.GetByTestId("save-message")).ToContainTextAsync("Saved");
+        var link = await page.GetByTestId("plan-link").GetAttributeAsync("href");
+        await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "demo-plan.png"), FullPage = true });
+
+        var reloaded = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/" + link));
+        await Assertions.Expect(reloaded.Locator("#windings-0-turns")).ToHaveValueAsync("40");
+        await Assertions.Expect(reloaded.Locator("#plan-name")).ToHaveValueAsync("Long-wire receive, 40 turns");
     }
 }

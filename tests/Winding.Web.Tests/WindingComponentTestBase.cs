@@ -22,6 +22,7 @@ public abstract class WindingComponentTestBase : BunitContext, IAsyncLifetime
         var paths = new WindingPaths(Path.Combine(AppContext.BaseDirectory, "cores"), Path.Combine(Path.GetTempPath(), "winding-tests-" + Guid.NewGuid().ToString("N")));
         Services.AddSingleton(paths);
         Services.AddSingleton(new CatalogueProvider(paths, TimeProvider.System, NullLogger<CatalogueProvider>.Instance));
+        Services.AddSingleton(new Winding.Catalogue.Plans.PlanStore(paths.DataDirectory, TimeProvider.System));
         Services.AddScoped<PlanningState>();
         JSInterop.Mode = JSRuntimeMode.Loose;
         SetRendererInfo(new RendererInfo("Server", isInteractive: true));

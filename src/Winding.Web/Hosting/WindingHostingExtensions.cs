@@ -38,6 +38,7 @@ public static class WindingHostingExtensions
         services.ConfigureHttpJsonOptions(options => options.SerializerOptions.NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.Strict);
         services.AddSingleton(WindingPaths.FromConfiguration(configuration));
         services.AddSingleton<CatalogueProvider>();
+        services.AddSingleton(sp => new Winding.Catalogue.Plans.PlanStore(sp.GetRequiredService<WindingPaths>().DataDirectory, sp.GetRequiredService<TimeProvider>()));
         services.AddSingleton(TimeProvider.System);
         services.AddScoped<PlanningState>();
         services.AddScoped<Characterising.CharacterisationState>();

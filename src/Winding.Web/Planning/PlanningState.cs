@@ -24,13 +24,16 @@ public sealed class PlanningState
     private readonly Dictionary<string, string> _errors = new(StringComparer.Ordinal);
     private readonly List<WindingDraft> _windings = [];
     private readonly Dictionary<int, WireChoiceReport> _suggestions = [];
+    private readonly PlanStore _plans;
     private PlanDocument? _loaded;
 
     /// <summary>Creates the state with a mid-size ring core and a primary and a secondary.</summary>
-    public PlanningState(CatalogueProvider catalogue)
+    public PlanningState(CatalogueProvider catalogue, PlanStore plans)
     {
         ArgumentNullException.ThrowIfNull(catalogue);
+        ArgumentNullException.ThrowIfNull(plans);
         _catalogue = catalogue;
+        _plans = plans;
         CoreId = catalogue.Catalogue.CoresById.ContainsKey(DefaultCoreId) ? DefaultCoreId : Cores.Count > 0 ? Cores[0].Id : null;
         _windings.Add(new WindingDraft { Name = "primary", Turns = "4", ConductorDiameter = "0.5" });
         _windings.Add(new WindingDraft { Name = "secondary", Turns = "8", ConductorDiameter = "0.4" });
@@ -158,7 +161,92 @@ public sealed class PlanningState
     }
 
     /// <summary>The plan's name (from a loaded plan, or empty).</summary>
-    public string PlanName { get; private set; } = string.Empty;
+    public string PlanName { get; set; } = string.Empty;
+
+    /// <summary>The id of the saved plan being edited, or null for an unsaved one.</summary>
+    public string? SavedId { get; private set; }
+
+    /// <summary>The version of the saved plan this form was loaded from or last saved as.</summary>
+    public int SavedVersion { get; private set; }
+
+    /// <summary>The message of the last save, and whether it succeeded.</summary>
+    public (string Text, bool Succeeded)? SaveMessage { get; private set; }
+
+    /// <summary>Loads a saved plan; false when there is none with that id.</summary>
+    public bool LoadSaved(string id)
+    {
+        var read = _plans.Read(id);
+        if (read.Plan?.Plan is not { } document)
+        {
+            SaveMessage = (read.Message, false);
+            return false;
+        }
+
+        Load(document);
+        PlanName = read.Plan.Name ?? PlanName;
+        SavedId = read.Plan.Id;
+        SavedVersion = read.Plan.Version ?? 0;
+        SaveMessage = null;
+        return true;
+    }
+
+    /// <summary>Saves the plan: a new saved plan the first time, then new versions of it (a stale save is refused).</summary>
+    public void Save()
+    {
+        var name = string.IsNullOrWhiteSpace(PlanName) ? "Untitled plan" : PlanName.Trim();
+        var document = ToDocument();
+        document.Name = name;
+        Winding.Catalogue.Store.StoreResult result;
+        if (SavedId is null)
+        {
+            result = _plans.Create(name, document);
+            if (result.Succeeded)
+            {
+                SavedId = result.Id;
+            }
+        }
+        else
+        {
+            result = _plans.Save(SavedId, document, SavedVersion);
+            if (result.Succeeded && _plans.Read(SavedId).Plan?.Name != name)
+            {
+                result = _plans.Rename(SavedId, name, result.Version ?? SavedVersion);
+            }
+        }
+
+        if (result.Succeeded)
+        {
+            SavedVersion = result.Version ?? SavedVersion;
+            PlanName = name;
+        }
+
+        SaveMessage = (result.Succeeded ? $"Saved (version {SavedVersion})." : result.Message, result.Succeeded);
+        Changed?.Invoke();
+    }
+
+    /// <summary>Saves the current form as a new variant of the saved plan (or as a new plan when unsaved).</summary>
+    public void SaveAsVariant()
+    {
+        var baseName = string.IsNullOrWhiteSpace(PlanName) ? "Untitled plan" : PlanName.Trim();
+        if (SavedId is null)
+        {
+            Save();
+            return;
+        }
+
+        var duplicate = _plans.Duplicate(SavedId, baseName + " (variant)");
+        if (!duplicate.Succeeded)
+        {
+            SaveMessage = (duplicate.Message, false);
+            Changed?.Invoke();
+            return;
+        }
+
+        SavedId = duplicate.Id;
+        SavedVersion = duplicate.Version ?? 1;
+        PlanName = baseName + " (variant)";
+        Save();
+    }
 
     /// <summary>
     /// Loads a plan document into the form: its catalogue core, windings, operating conditions; what the form does not

@@ -10,15 +10,46 @@ public sealed partial class PlanPage
     [Inject]
     private PlanningState State { get; set; } = default!;
 
+    private string? _shown;
+
+    /// <summary>A saved plan's id (<c>/plan/{id}</c>).</summary>
+    [Parameter]
+    public string? PlanId { get; set; }
+
     /// <summary>A core to start with, e.g. one just saved on the measuring page (<c>/plan?core=id</c>).</summary>
     [SupplyParameterFromQuery(Name = "core")]
     public string? CoreQuery { get; set; }
 
+    /// <summary>A demo plan to open (<c>/plan?demo=id</c>).</summary>
+    [SupplyParameterFromQuery(Name = "demo")]
+    public string? DemoQuery { get; set; }
+
+    private string ExportFileName => (string.IsNullOrWhiteSpace(State.PlanName) ? "plan" : string.Concat(State.PlanName.Where(c => char.IsLetterOrDigit(c) || c is ' ' or '-')).Trim().Replace(' ', '-')) + ".json";
+
+    private string ExportHref => "data:application/json;charset=utf-8," + Uri.EscapeDataString(System.Text.Json.JsonSerializer.Serialize(State.ToDocument(), Winding.Catalogue.Loading.CatalogueJson.Options));
+
     /// <inheritdoc />
-    protected override void OnInitialized()
+    protected override void OnInitialized() => State.Changed += OnStateChanged;
+
+    /// <inheritdoc />
+    protected override void OnParametersSet()
     {
-        State.Changed += OnStateChanged;
-        if (!string.IsNullOrEmpty(CoreQuery) && CoreQuery != State.CoreId)
+        var key = $"{PlanId}|{DemoQuery}|{CoreQuery}";
+        if (key == _shown)
+        {
+            return;
+        }
+
+        _shown = key;
+        if (!string.IsNullOrEmpty(PlanId))
+        {
+            State.LoadSaved(PlanId);
+        }
+        else if (DemoPlans.Find(DemoQuery) is { } demo)
+        {
+            State.Load(demo.Document);
+        }
+        else if (!string.IsNullOrEmpty(CoreQuery) && CoreQuery != State.CoreId)
         {
             State.SelectCore(CoreQuery);
         }
