@@ -11,6 +11,8 @@ public sealed partial class PlanPage
     private PlanningState State { get; set; } = default!;
 
     private string? _shown;
+    private Winding.Core.Plans.ResponseEvaluation? _chartFor;
+    private IReadOnlyList<(string Name, Winding.Core.Plans.ResponseEvaluation Response)> _chart = [];
 
     /// <summary>A saved plan's id (<c>/plan/{id}</c>).</summary>
     [Parameter]
@@ -30,6 +32,18 @@ public sealed partial class PlanPage
 
     /// <inheritdoc />
     protected override void OnInitialized() => State.Changed += OnStateChanged;
+
+    /// <summary>The chart's list, rebuilt only when the response changed (so the chart redraws only then).</summary>
+    private IReadOnlyList<(string Name, Winding.Core.Plans.ResponseEvaluation Response)> ChartResponses(Winding.Core.Plans.ResponseEvaluation response)
+    {
+        if (!ReferenceEquals(response, _chartFor))
+        {
+            _chartFor = response;
+            _chart = [(string.IsNullOrWhiteSpace(State.PlanName) ? "this plan" : State.PlanName, response)];
+        }
+
+        return _chart;
+    }
 
     /// <inheritdoc />
     protected override void OnParametersSet()
