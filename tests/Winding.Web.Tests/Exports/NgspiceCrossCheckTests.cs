@@ -29,12 +29,42 @@ public sealed class NgspiceCrossCheckTests : IClassFixture<WebApplicationFactory
         { "toroid multilayer with wrap 1:4", """ "core": { "catalogueId": "toroid-61x36x13-nizn-125" }, "windings": [ { "name": "primary", "turns": 10, "wire": { "metricMm": 1.0 } }, { "name": "secondary", "turns": 40, "wire": { "metricMm": 0.8 }, "insulation": { "material": "polyester", "thicknessMm": 0.1 } } ], "operating": { "minFrequencyHz": 1e6, "maxFrequencyHz": 1e7, "sourceResistanceOhm": 50, "loadResistanceOhm": 800, "driveVoltageRms": 1 }, "sweep": { "startHz": 1e4, "stopHz": 1e9, "points": 201 } """ },
     };
 
+    public static TheoryData<string> DemoPlanIds()
+    {
+        var data = new TheoryData<string>();
+        foreach (var demo in Winding.Web.Planning.DemoPlans.All)
+        {
+            data.Add(demo.Id);
+        }
+
+        return data;
+    }
+
     [SkippableTheory]
     [MemberData(nameof(Plans))]
-    public async Task ExportedNetlist_RunInNgspice_MatchesTheEngineWithin0p01Db(string label, string plan)
+    public Task ExportedNetlist_RunInNgspice_MatchesTheEngineWithin0p01Db(string label, string plan) =>
+        CrossCheck(label, "{ " + plan + ", \"options\": { \"frequencyIndependentCore\": true } }");
+
+    [SkippableTheory]
+    [MemberData(nameof(DemoPlanIds))]
+    public Task EveryDemoPlan_ExportedNetlist_MatchesTheEngineWithin0p01Db(string id)
+    {
+        // The demo's own plan, swept over whole decades (a decade and more beyond its band) so that the engine's grid and
+        // ngspice's ".ac dec" grid coincide point for point.
+        var options = Winding.Catalogue.Loading.CatalogueJson.Options;
+        var demo = System.Text.Json.JsonSerializer.Deserialize<Winding.Catalogue.Plans.PlanDocument>(System.Text.Json.JsonSerializer.Serialize(Winding.Web.Planning.DemoPlans.Find(id)!.Document, options), options)!;
+        var op = demo.Operating!;
+        var start = Math.Pow(10, Math.Floor(Math.Log10(op.MinFrequencyHz!.Value / 10)));
+        var stop = Math.Pow(10, Math.Ceiling(Math.Log10(op.MaxFrequencyHz!.Value * 10)));
+        var decades = (int)Math.Round(Math.Log10(stop / start));
+        demo.Sweep = new Winding.Catalogue.Plans.PlanSweepDocument { StartHz = start, StopHz = stop, Points = decades * 40 + 1 };
+        demo.Options = new Winding.Catalogue.Plans.PlanOptionsDocument { FrequencyIndependentCore = true };
+        return CrossCheck(id, System.Text.Json.JsonSerializer.Serialize(demo, Winding.Catalogue.Loading.CatalogueJson.Options));
+    }
+
+    private async Task CrossCheck(string label, string body)
     {
         var ngspice = RequiredTools.Ngspice();
-        var body = "{ " + plan + ", \"options\": { \"frequencyIndependentCore\": true } }";
         using var client = _factory.CreateClient();
         using var evaluateResponse = await client.PostAsync(new Uri("/api/v1/evaluate", UriKind.Relative), Json(body));
         var evaluateText = await evaluateResponse.Content.ReadAsStringAsync();
