@@ -280,7 +280,7 @@ public sealed class PlanningState
                 ImportedWire = wire is not null && wire.StandardId is null && !custom ? wire : null,
                 Placement = w.Placement,
                 Insulation = w.Insulation,
-                Taps = w.Taps,
+                TapsText = w.Taps is { Count: > 0 } taps ? string.Join(", ", taps) : string.Empty,
                 TargetInductanceH = w.TargetInductanceH,
             });
         }
@@ -385,7 +385,7 @@ public sealed class PlanningState
                 RmsCurrentA = Number(errors, $"{prefix}.rmsCurrentA", draft.RmsCurrent, "RMS current", "A", required: false),
                 Placement = draft.Placement,
                 Insulation = draft.Insulation,
-                Taps = draft.Taps,
+                Taps = Taps(errors, $"{prefix}.taps", draft.TapsText),
                 TargetInductanceH = draft.TargetInductanceH,
             });
         }
@@ -441,6 +441,28 @@ public sealed class PlanningState
         }
 
         return value;
+    }
+
+    private static List<int>? Taps(Dictionary<string, string> errors, string path, string text)
+    {
+        if (string.IsNullOrWhiteSpace(text))
+        {
+            return null;
+        }
+
+        var taps = new List<int>();
+        foreach (var part in text.Split([',', ' ', ';'], StringSplitOptions.RemoveEmptyEntries))
+        {
+            if (!int.TryParse(part, NumberStyles.Integer, CultureInfo.InvariantCulture, out var tap))
+            {
+                errors[path] = $"Taps: '{part}' is not a whole number of turns; write them like 5, 10.";
+                return null;
+            }
+
+            taps.Add(tap);
+        }
+
+        return taps;
     }
 
     private static int? Whole(Dictionary<string, string> errors, string path, string text, string label, bool required)

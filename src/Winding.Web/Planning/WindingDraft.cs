@@ -33,8 +33,8 @@ public sealed class WindingDraft
     /// <summary>Insulation wrap from a loaded plan (kept as is).</summary>
     public Winding.Catalogue.Plans.PlanInsulationDocument? Insulation { get; set; }
 
-    /// <summary>Taps from a loaded plan (kept as is).</summary>
-    public List<int>? Taps { get; set; }
+    /// <summary>Taps as typed: turn counts separated by commas or spaces (empty: none).</summary>
+    public string TapsText { get; set; } = string.Empty;
 
     /// <summary>Target inductance from a loaded plan (kept as is).</summary>
     public double? TargetInductanceH { get; set; }

@@ -80,4 +80,53 @@ public sealed class PlanningStateTests : WindingComponentTestBase
         Assert.NotNull(State.Result);
         Assert.Null(State.Result!.Operating);
     }
+
+    [Fact]
+    public void Arrangement_BifilarWrapAndTaps_ReachThePlan()
+    {
+        State.EditWinding(0, w => { w.Turns = "8"; w.TapsText = "2, 4"; });
+        State.EditWinding(1, w =>
+        {
+            w.Turns = "8";
+            w.Placement = new Winding.Catalogue.Plans.PlanPlacementDocument { Kind = "bifilar", Winding = 0 };
+            w.Insulation = new Winding.Catalogue.Plans.PlanInsulationDocument { Material = "ptfe", ThicknessMm = 0.1 };
+        });
+
+        Assert.NotNull(State.Plan);
+        Assert.Equal([2, 4], State.Plan!.Windings[0].Taps);
+        Assert.Equal(Winding.Core.Windings.PlacementKind.Bifilar, State.Plan.Windings[1].Placement.Kind);
+        Assert.Equal(0.1, State.Plan.Windings[1].Wrap!.Thickness.Millimetres, 12);
+        Assert.Contains("bifilar", State.Result!.Parasitics.LeakageMethod, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Taps_NotWholeNumbers_AreAnErrorAtTheTapsField()
+    {
+        State.EditWinding(0, w => w.TapsText = "2, x");
+
+        Assert.NotNull(State.ErrorFor("windings[0].taps"));
+        Assert.Null(State.Result);
+    }
+
+    [Fact]
+    public void Sector_OnABobbin_IsAnErrorAtThePlacement()
+    {
+        State.SelectCore("bobbin-rm-ae-37-mnzn-2000");
+        State.EditWinding(1, w => w.Placement = new Winding.Catalogue.Plans.PlanPlacementDocument { Kind = "sector", StartDegrees = 0, EndDegrees = 180 });
+
+        Assert.NotNull(State.ErrorFor("windings[1].placement.kind"));
+    }
+
+    [Fact]
+    public void Load_DemoPlan_KeepsWhatTheFormDoesNotEdit()
+    {
+        var demo = DemoPlans.Find("club-current-sense")!;
+
+        State.Load(demo.Document);
+
+        Assert.Equal("Club current-sense transformer, 100 kHz converter", State.PlanName);
+        Assert.NotNull(State.Windings[0].ImportedWire?.HookUp);
+        Assert.NotNull(State.Result);
+        Assert.Equal(Winding.Core.Wire.WireKind.HookUp, State.Plan!.Windings[0].Wire.Kind);
+    }
 }
