@@ -224,6 +224,40 @@ public sealed class PlanningState
         Changed?.Invoke();
     }
 
+    /// <summary>Saved plans to compare with (ids).</summary>
+    public IReadOnlyCollection<string> CompareIds { get; private set; } = [];
+
+    /// <summary>The saved plans that can be compared with this one (all but itself).</summary>
+    public IReadOnlyList<PlanSummary> ComparablePlans => [.. _plans.List().Plans.Where(p => p.Id != SavedId)];
+
+    /// <summary>The compared plans, evaluated now against the current catalogue (those that no longer read are left out).</summary>
+    public IReadOnlyList<(string Name, TransformerPlan Plan, PlanEvaluation Evaluation)> Comparisons { get; private set; } = [];
+
+    /// <summary>Chooses the saved plans to compare with.</summary>
+    public void SetCompare(IEnumerable<string> ids)
+    {
+        ArgumentNullException.ThrowIfNull(ids);
+        CompareIds = [.. ids.Distinct(StringComparer.Ordinal)];
+        var list = new List<(string, TransformerPlan, PlanEvaluation)>();
+        foreach (var id in CompareIds)
+        {
+            var saved = _plans.Read(id).Plan;
+            if (saved?.Plan is null)
+            {
+                continue;
+            }
+
+            var read = PlanReader.Read(saved.Plan, _catalogue.Catalogue);
+            if (read.IsValid)
+            {
+                list.Add((saved.Name ?? id, read.Plan!, PlanEvaluator.Evaluate(read.Plan!)));
+            }
+        }
+
+        Comparisons = list;
+        Changed?.Invoke();
+    }
+
     /// <summary>Saves the current form as a new variant of the saved plan (or as a new plan when unsaved).</summary>
     public void SaveAsVariant()
     {

@@ -91,4 +91,27 @@ public sealed class PlanPageTests : WindingComponentTestBase
         page.WaitForAssertion(() => Assert.NotNull(state.Windings[0].StandardId));
         Assert.NotNull(state.Result);
     }
+
+    [Fact]
+    public void PlanPage_ComparedVariant_ShowsBothColumnsInTheVariantTable()
+    {
+        var page = Render<PlanPage>();
+        var state = Services.GetRequiredService<PlanningState>();
+        state.SelectCore("toroid-10x5x4-nizn-850");
+        state.EditWinding(0, w => w.Turns = "10");
+        state.PlanName = "Ten turns";
+        state.Save();
+        var first = state.SavedId!;
+        state.EditWinding(0, w => w.Turns = "20");
+        state.SaveAsVariant();
+
+        state.SetCompare([first]);
+
+        page.WaitForAssertion(() => Assert.NotNull(page.Find("[data-testid=variant-table]")));
+        var table = page.Find("[data-testid=variant-table]").TextContent;
+        Assert.Contains("Ten turns (variant)", table, StringComparison.Ordinal);
+        // AL 471.34 nH (IEC 60205 ring constants, as above): 20 turns → 189 µH beside 10 turns → 47.1 µH.
+        Assert.Contains("189 µH", table, StringComparison.Ordinal);
+        Assert.Contains("47.1 µH", table, StringComparison.Ordinal);
+    }
 }

@@ -129,4 +129,33 @@ public sealed class PlanningStateTests : WindingComponentTestBase
         Assert.NotNull(State.Result);
         Assert.Equal(Winding.Core.Wire.WireKind.HookUp, State.Plan!.Windings[0].Wire.Kind);
     }
+    [Fact]
+    public void SaveAsVariant_ThenCompare_EvaluatesTheOriginalBesideTheVariant()
+    {
+        State.Load(DemoPlans.Find("club-current-sense")!.Document);
+        State.Save();
+        var originalId = State.SavedId!;
+        var originalTurns = State.Plan!.Windings[0].Turns;
+        State.EditWinding(0, w => w.Turns = (originalTurns + 2).ToString(System.Globalization.CultureInfo.InvariantCulture));
+
+        State.SaveAsVariant();
+        Assert.NotEqual(originalId, State.SavedId);
+        Assert.Contains(State.ComparablePlans, p => p.Id == originalId);
+        Assert.DoesNotContain(State.ComparablePlans, p => p.Id == State.SavedId);
+
+        State.SetCompare([originalId]);
+
+        var compared = Assert.Single(State.Comparisons);
+        Assert.Equal(originalTurns, compared.Plan.Windings[0].Turns);
+        Assert.Equal(originalTurns + 2, State.Plan!.Windings[0].Turns);
+        Assert.NotEqual(State.Result!.Windings[0].InductanceH, compared.Evaluation.Windings[0].InductanceH);
+    }
+
+    [Fact]
+    public void SetCompare_UnknownId_IsLeftOut()
+    {
+        State.SetCompare(["no-such-plan"]);
+
+        Assert.Empty(State.Comparisons);
+    }
 }

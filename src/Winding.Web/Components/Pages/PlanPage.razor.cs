@@ -12,6 +12,7 @@ public sealed partial class PlanPage
 
     private string? _shown;
     private Winding.Core.Plans.ResponseEvaluation? _chartFor;
+    private object? _comparedFor;
     private IReadOnlyList<(string Name, Winding.Core.Plans.ResponseEvaluation Response)> _chart = [];
 
     /// <summary>A saved plan's id (<c>/plan/{id}</c>).</summary>
@@ -36,10 +37,12 @@ public sealed partial class PlanPage
     /// <summary>The chart's list, rebuilt only when the response changed (so the chart redraws only then).</summary>
     private IReadOnlyList<(string Name, Winding.Core.Plans.ResponseEvaluation Response)> ChartResponses(Winding.Core.Plans.ResponseEvaluation response)
     {
-        if (!ReferenceEquals(response, _chartFor))
+        var compared = State.Comparisons;
+        if (!ReferenceEquals(response, _chartFor) || !ReferenceEquals(compared, _comparedFor))
         {
             _chartFor = response;
-            _chart = [(string.IsNullOrWhiteSpace(State.PlanName) ? "this plan" : State.PlanName, response)];
+            _comparedFor = compared;
+            _chart = [(string.IsNullOrWhiteSpace(State.PlanName) ? "this plan" : State.PlanName, response), .. compared.Where(c => c.Evaluation.Response is not null).Select(c => (c.Name, c.Evaluation.Response!))];
         }
 
         return _chart;
