@@ -267,7 +267,7 @@ public sealed class PlanStore
     }
 
     /// <summary>
-    /// Saves an exported plan (saved-plan JSON) as a new plan: the shape is checked (unknown fields refused, each error
+    /// Saves an exported plan (saved-plan JSON, or the bare plan document the plan page exports) as a new plan: the shape is checked (unknown fields refused, each error
     /// with its field path); it gets a fresh id made from its name, version 1 and the current time. Its id, times,
     /// version and <see cref="SavedPlan.VariantOf"/> are not taken over (they belong to the store it came from).
     /// </summary>
@@ -277,7 +277,9 @@ public sealed class PlanStore
         SavedPlan? imported;
         try
         {
-            imported = JsonSerializer.Deserialize<SavedPlan>(json, CatalogueJson.Options);
+            imported = IsBarePlan(json)
+                ? Wrap(JsonSerializer.Deserialize<PlanDocument>(json, CatalogueJson.Options))
+                : JsonSerializer.Deserialize<SavedPlan>(json, CatalogueJson.Options);
         }
         catch (JsonException e)
         {
@@ -315,6 +317,27 @@ public sealed class PlanStore
             }
         });
     }
+
+    /// <summary>True when the JSON is a bare plan document (what the plan page exports): an object with core, windings or operating and no plan.</summary>
+    private static bool IsBarePlan(string json)
+    {
+        try
+        {
+            using var parsed = JsonDocument.Parse(json);
+            var root = parsed.RootElement;
+            return root.ValueKind == JsonValueKind.Object
+                && !root.TryGetProperty("plan", out _)
+                && (root.TryGetProperty("core", out _) || root.TryGetProperty("windings", out _) || root.TryGetProperty("operating", out _));
+        }
+        catch (JsonException)
+        {
+            return false;
+        }
+    }
+
+    /// <summary>A bare plan document as a saved plan named after it ("Imported plan" when it has no name).</summary>
+    private static SavedPlan? Wrap(PlanDocument? plan) =>
+        plan is null ? null : new SavedPlan { Name = string.IsNullOrWhiteSpace(plan.Name) ? "Imported plan" : plan.Name, Plan = plan };
 
     private StoreResult CreateLocked(string name, PlanDocument plan, string? variantOf, string verb)
     {

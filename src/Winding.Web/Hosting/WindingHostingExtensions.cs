@@ -41,6 +41,7 @@ public static class WindingHostingExtensions
         services.AddSingleton(sp => new Winding.Catalogue.Plans.PlanStore(sp.GetRequiredService<WindingPaths>().DataDirectory, sp.GetRequiredService<TimeProvider>()));
         services.AddSingleton(TimeProvider.System);
         services.AddScoped<PlanningState>();
+        services.AddTransient<SavedPlansModel>();
         services.AddScoped<Characterising.CharacterisationState>();
         return services;
     }

@@ -233,6 +233,29 @@ public sealed class PlanStoreTests : IDisposable
     }
 
     [Fact]
+    public void Import_BarePlanDocument_IsSavedUnderItsOwnName()
+    {
+        var store = NewStore();
+        var plan = Plan();
+        plan.Name = "Bare";
+
+        var result = store.Import(Json(plan));
+
+        Assert.Equal((StoreOutcome.Ok, "bare", 1), (result.Outcome, result.Id, result.Version));
+        Assert.Equal(Json(plan), Json(store.Read("bare").Plan!.Plan!));
+    }
+
+    [Fact]
+    public void Import_BarePlanDocument_WithABadField_NamesIt()
+    {
+        var result = NewStore().Import("""{ "windings": [ { "turns": "three" } ] }""");
+
+        Assert.Equal(StoreOutcome.Invalid, result.Outcome);
+        Assert.Contains(result.Errors, e => e.Field == "windings[0].turns");
+        Assert.False(Directory.Exists(Path.Combine(_data, "plans")));
+    }
+
+    [Fact]
     public void Import_HostileIdInTheFile_IsIgnored_AndAFreshIdIsMade()
     {
         var store = NewStore();
