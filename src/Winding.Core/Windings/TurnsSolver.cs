@@ -46,4 +46,27 @@ public static class TurnsSolver
 
         return ForInductance(alAtFrequency, factor * impedanceOhm / (2 * Math.PI * frequencyHz), alTolerance);
     }
+
+    /// <summary>
+    /// The smallest whole multiple of a plan's turns ratio whose first winding has at least
+    /// <paramref name="minimumPrimaryTurns"/>: with g = gcd(N₁ … Nₙ) the ratio in lowest terms is Nᵢ/g, and the result
+    /// is m·Nᵢ/g with m = ⌈N_min·g / N₁⌉. Every ratio Nᵢ/N₁ — hence the impedance ratio (N₂/N₁)² — is kept exactly.
+    /// </summary>
+    /// <param name="turns">The windings' turns, the primary first; each at least one.</param>
+    /// <param name="minimumPrimaryTurns">Primary turns to reach, at least one.</param>
+    public static IReadOnlyList<int> ScaleKeepingRatio(IReadOnlyList<int> turns, int minimumPrimaryTurns)
+    {
+        ArgumentNullException.ThrowIfNull(turns);
+        if (turns.Count == 0 || turns.Any(t => t < 1))
+        {
+            throw new ArgumentException("Every winding needs at least one turn.", nameof(turns));
+        }
+
+        ArgumentOutOfRangeException.ThrowIfLessThan(minimumPrimaryTurns, 1);
+        var g = turns.Aggregate(0L, (a, t) => (long)MathNet.Numerics.Euclid.GreatestCommonDivisor(a, t));
+        var primaryBase = turns[0] / g;
+        var multiplier = (minimumPrimaryTurns + primaryBase - 1) / primaryBase;
+        return [.. turns.Select(t => checked((int)(t / g * multiplier)))];
+    }
 }
+

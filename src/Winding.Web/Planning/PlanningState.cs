@@ -132,6 +132,57 @@ public sealed class PlanningState
         Recalculate();
     }
 
+    /// <summary>
+    /// Moves winding <paramref name="index"/> one place up (<paramref name="offset"/> −1) or down (+1); placements that
+    /// point at the two swapped windings follow them.
+    /// </summary>
+    public void MoveWinding(int index, int offset)
+    {
+        var other = index + offset;
+        if (offset is not (-1 or 1) || index < 0 || index >= _windings.Count || other < 0 || other >= _windings.Count)
+        {
+            return;
+        }
+
+        (_windings[index], _windings[other]) = (_windings[other], _windings[index]);
+        foreach (var draft in _windings)
+        {
+            if (draft.Placement is { Winding: { } target } placement)
+            {
+                placement.Winding = target == index ? other : target == other ? index : target;
+            }
+        }
+
+        _suggestions.Clear();
+        Recalculate();
+    }
+
+    /// <summary>
+    /// The turns that meet the reactance rule at the bottom of the band while keeping the turns ratio, or null when
+    /// there is no result with operating conditions or the plan already meets it.
+    /// </summary>
+    public IReadOnlyList<int>? TurnsForBand =>
+        Result?.Magnetizing is { } branch && Plan is { } plan && plan.Windings[0].Turns < branch.PrimaryTurnsNeeded
+            ? TurnsSolver.ScaleKeepingRatio([.. plan.Windings.Select(w => w.Turns)], branch.PrimaryTurnsNeeded)
+            : null;
+
+    /// <summary>Sets every winding's turns to <see cref="TurnsForBand"/>.</summary>
+    public void UseTurnsForBand()
+    {
+        if (TurnsForBand is not { } turns)
+        {
+            return;
+        }
+
+        for (var i = 0; i < _windings.Count && i < turns.Count; i++)
+        {
+            _windings[i].Turns = turns[i].ToString(System.Globalization.CultureInfo.InvariantCulture);
+        }
+
+        _suggestions.Clear();
+        Recalculate();
+    }
+
     /// <summary>Asks the engine's gauge picker for wires for winding <paramref name="index"/>.</summary>
     public void SuggestWires(int index)
     {

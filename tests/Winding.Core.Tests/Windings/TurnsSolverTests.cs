@@ -1,3 +1,4 @@
+using CsCheck;
 using Winding.Core.Windings;
 
 namespace Winding.Core.Tests.Windings;
@@ -38,5 +39,43 @@ public sealed class TurnsSolverTests
     public void ForInductance_RejectsNonPositiveTargets(double target)
     {
         Assert.Throws<ArgumentOutOfRangeException>(() => TurnsSolver.ForInductance(Al1000nH, target, 0));
+    }
+
+    [Theory]
+    // A 1:9 impedance ratio is a 1:3 turns ratio ((N₂/N₁)² = Z₂/Z₁, ideal-transformer relation).
+    [InlineData(new[] { 2, 6 }, 5, new[] { 5, 15 })]
+    [InlineData(new[] { 3, 5 }, 7, new[] { 9, 15 })]
+    [InlineData(new[] { 4, 8 }, 7, new[] { 7, 14 })]
+    [InlineData(new[] { 4, 2, 2 }, 9, new[] { 10, 5, 5 })]
+    [InlineData(new[] { 10, 1 }, 3, new[] { 10, 1 })]
+    public void ScaleKeepingRatio_SmallestWholeMultiple(int[] turns, int minimum, int[] expected)
+    {
+        Assert.Equal(expected, TurnsSolver.ScaleKeepingRatio(turns, minimum));
+    }
+
+    [Fact]
+    public void ScaleKeepingRatio_Property_KeepsEveryRatio_ReachesTheMinimum_AndIsTheSmallestSuch()
+    {
+        Gen.Select(Gen.Int[1, 60].Array[1, 4], Gen.Int[1, 400]).Sample((turns, minimum) =>
+        {
+            var scaled = TurnsSolver.ScaleKeepingRatio(turns, minimum);
+
+            Assert.True(scaled[0] >= minimum);
+            for (var i = 1; i < turns.Length; i++)
+            {
+                Assert.Equal((long)turns[i] * scaled[0], (long)scaled[i] * turns[0]);
+            }
+
+            // One step smaller in the lowest-terms ratio falls short of the minimum (or would be zero turns).
+            var g = turns.Aggregate(0, (a, t) => (int)MathNet.Numerics.Euclid.GreatestCommonDivisor(a, t));
+            Assert.True(scaled[0] - turns[0] / g < minimum);
+        });
+    }
+
+    [Fact]
+    public void ScaleKeepingRatio_NoTurns_IsRefused()
+    {
+        Assert.Throws<ArgumentException>(() => TurnsSolver.ScaleKeepingRatio([3, 0], 5));
+        Assert.Throws<ArgumentOutOfRangeException>(() => TurnsSolver.ScaleKeepingRatio([3], 0));
     }
 }

@@ -114,4 +114,35 @@ public sealed class PlanPageTests : WindingComponentTestBase
         Assert.Contains("189 µH", table, StringComparison.Ordinal);
         Assert.Contains("47.1 µH", table, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void PlanPage_TurnsForBand_ButtonSetsTheTurns()
+    {
+        var page = Render<PlanPage>();
+        var state = Services.GetRequiredService<PlanningState>();
+        state.SelectCore("toroid-10x5x4-nizn-850");
+        state.EditWinding(0, w => w.Turns = "1");
+        state.EditWinding(1, w => w.Turns = "1");
+
+        page.WaitForAssertion(() => Assert.NotNull(page.Find("[data-testid=turns-for-band]")));
+        var expected = state.TurnsForBand![0];
+        page.Find("[data-testid=use-turns-for-band] button, button[data-testid=use-turns-for-band]").Click();
+
+        page.WaitForAssertion(() => Assert.Empty(page.FindAll("[data-testid=turns-for-band]")));
+        Assert.Equal(expected.ToString(System.Globalization.CultureInfo.InvariantCulture), state.Windings[0].Turns);
+        Assert.Equal(state.Windings[0].Turns, state.Windings[1].Turns);
+    }
+
+    [Fact]
+    public void PlanPage_MoveDown_ReordersTheWindings()
+    {
+        var page = Render<PlanPage>();
+        var state = Services.GetRequiredService<PlanningState>();
+        var first = state.Windings[0].Name;
+
+        page.Find("button[data-testid=windings-0-down]").Click();
+
+        page.WaitForAssertion(() => Assert.Equal(first, state.Windings[1].Name));
+    }
 }
+

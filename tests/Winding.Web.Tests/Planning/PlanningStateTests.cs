@@ -158,4 +158,41 @@ public sealed class PlanningStateTests : WindingComponentTestBase
 
         Assert.Empty(State.Comparisons);
     }
+
+    [Fact]
+    public void UseTurnsForBand_MeetsTheReactanceRule_AndKeepsTheRatio()
+    {
+        State.SelectCore("toroid-10x5x4-nizn-850");
+        State.EditWinding(0, w => w.Turns = "2");
+        State.EditWinding(1, w => w.Turns = "6");
+        State.EditOperating(o => { o.MinFrequency = "1.8 MHz"; o.SourceResistance = "50"; o.LoadResistance = "450"; });
+        var suggested = State.TurnsForBand!;
+
+        State.UseTurnsForBand();
+
+        var plan = State.Plan!;
+        Assert.Equal(suggested, plan.Windings.Select(w => w.Turns));
+        Assert.Equal(3 * plan.Windings[0].Turns, plan.Windings[1].Turns);
+        // X ≥ k·Z at f_min (common practice, no source; k = 4): checked here from L = AL(f)·N² as the engine reports it.
+        var branch = State.Result!.Magnetizing!;
+        Assert.True(branch.ReactanceOhm >= branch.ReactanceFactor * branch.ImpedanceSeenOhm, $"{branch.ReactanceOhm} Ω");
+        Assert.Null(State.TurnsForBand);
+    }
+
+    [Fact]
+    public void MoveWinding_SwapsThem_AndPlacementsFollow()
+    {
+        State.AddWinding();
+        State.EditWinding(0, w => w.Name = "first");
+        State.EditWinding(1, w => w.Name = "second");
+        State.EditWinding(2, w => w.Placement = new Winding.Catalogue.Plans.PlanPlacementDocument { Kind = "over", Winding = 0 });
+
+        State.MoveWinding(0, 1);
+
+        Assert.Equal(["second", "first"], State.Windings.Take(2).Select(w => w.Name));
+        Assert.Equal(1, State.Windings[2].Placement!.Winding);
+        State.MoveWinding(0, -1);
+        Assert.Equal("second", State.Windings[0].Name);
+    }
 }
+
