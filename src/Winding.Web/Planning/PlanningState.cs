@@ -46,6 +46,26 @@ public sealed class PlanningState
     /// <summary>The cores to pick from.</summary>
     public IReadOnlyList<CatalogueCore> Cores => _catalogue.Catalogue.Cores;
 
+    /// <summary>What the user typed to narrow the core list (shape, size, material).</summary>
+    public string CoreFilter { get; private set; } = string.Empty;
+
+    /// <summary>The cores matching <see cref="CoreFilter"/>; the chosen core is always among them.</summary>
+    public IReadOnlyList<CatalogueCore> FilteredCores
+    {
+        get
+        {
+            var found = CoreSearch.Filter(Cores, CoreFilter);
+            return SelectedCore is { } selected && !found.Contains(selected) ? [selected, .. found] : found;
+        }
+    }
+
+    /// <summary>Narrows the core list.</summary>
+    public void FilterCores(string? text)
+    {
+        CoreFilter = text ?? string.Empty;
+        Changed?.Invoke();
+    }
+
     /// <summary>The selected catalogue core id.</summary>
     public string? CoreId { get; private set; }
 
