@@ -14,5 +14,11 @@ public static class WindingTheme
             Secondary = "#3d5a6c",
             AppbarBackground = "#3d5a6c",
         },
+        PaletteDark = new PaletteDark
+        {
+            Primary = "#e0955f",
+            Secondary = "#8fb3c7",
+            AppbarBackground = "#22313b",
+        },
     };
 }
