@@ -1,0 +1,46 @@
+using System.Text.RegularExpressions;
+
+namespace Winding.Web.Display;
+
+/// <summary>
+/// What each plan input means, with where its rule comes from, shown as the field's tooltip. Keyed by the field id;
+/// a winding's fields (<c>windings-2-turns</c>) share the definition of their last part (<c>turns</c>).
+/// </summary>
+public static partial class InputHelp
+{
+    private static readonly Dictionary<string, string> Definitions = new(StringComparer.Ordinal)
+    {
+        ["min-frequency"] = "Lowest frequency of the band: the worst case for magnetising reactance and flux density (B = V/(4.44·f·N·Ae) for a sine, Faraday's law). Accepts 1.8 MHz, 1800k, 1.8e6.",
+        ["max-frequency"] = "Highest frequency of the band: sets skin and proximity loss (Dowell 1966) and is checked against leakage and self-resonance.",
+        ["source-resistance"] = "Resistance of whatever drives the primary, Ω (0 for a stiff voltage source). With the load it sets the impedance the magnetising reactance works against, 2·(RS ∥ RL′).",
+        ["load-resistance"] = "Resistance across the last winding, Ω; referred to the primary by the square of the turns ratio (ideal-transformer relation).",
+        ["drive-voltage"] = "RMS voltage across the primary at the operating point; sets flux density, core loss and currents.",
+        ["ambient"] = "Air temperature around the core, °C; the estimated temperature rise is added to it.",
+        ["duty-cycle"] = "Fraction of each period the pulse is on (0 … 1); the volt-seconds of the longest on-time set the peak flux.",
+        ["turns"] = "Whole turns through the core. On a ring core each pass through the hole is one turn (common practice, no source).",
+        ["conductor"] = "Bare copper diameter, mm, as on the spool label (IEC 60317 nominal for a standard wire). Accepts 0.4 or 0,4.",
+        ["overall"] = "Diameter over the enamel or insulation, mm: what sets how many turns fit per layer. Empty: the IEC 60317-0-1 grade 1 build is assumed.",
+        ["in-hand"] = "Identical wires wound side by side as one turn (parallel strands): more copper area, same turns. Empty: 1.",
+        ["current"] = "RMS current in this winding, A; empty to derive it from the drive and load (first and last winding).",
+        ["sector-start"] = "Where this winding's sector begins, degrees around a ring core.",
+        ["sector-end"] = "Where this winding's sector ends, degrees around a ring core.",
+        ["wrap-thickness"] = "Total thickness of the insulation wrapped over this winding, mm; it adds distance (less capacitance, more leakage).",
+        ["taps"] = "Turn counts at which a tap is brought out, counted from the winding's start, separated by commas.",
+    };
+
+    /// <summary>The definition for the field <paramref name="id"/>, or null when there is none.</summary>
+    public static string? For(string? id)
+    {
+        if (string.IsNullOrEmpty(id))
+        {
+            return null;
+        }
+
+        return Definitions.TryGetValue(id, out var text) ? text
+            : WindingField().Match(id) is { Success: true } m && Definitions.TryGetValue(m.Groups[1].Value, out var shared) ? shared
+            : null;
+    }
+
+    [GeneratedRegex(@"^windings-\d+-(.+)$", RegexOptions.CultureInvariant)]
+    private static partial Regex WindingField();
+}

@@ -1,0 +1,38 @@
+using Winding.Web.Components.Pages;
+using Winding.Web.Display;
+
+namespace Winding.Web.Tests.Display;
+
+/// <summary>Every input on the plan page carries its definition as a tooltip (behaviour, no physics).</summary>
+public sealed class InputHelpTests : WindingComponentTestBase
+{
+    [Theory]
+    [InlineData("min-frequency")]
+    [InlineData("max-frequency")]
+    [InlineData("source-resistance")]
+    [InlineData("load-resistance")]
+    [InlineData("drive-voltage")]
+    [InlineData("ambient")]
+    [InlineData("windings-0-turns")]
+    [InlineData("windings-1-conductor")]
+    [InlineData("windings-1-overall")]
+    [InlineData("windings-0-in-hand")]
+    [InlineData("windings-0-current")]
+    [InlineData("windings-1-taps")]
+    public void PlanPageInput_HasItsDefinitionAsTooltip(string id)
+    {
+        var page = Render<PlanPage>();
+
+        var definition = InputHelp.For(id);
+
+        Assert.False(string.IsNullOrWhiteSpace(definition));
+        Assert.Contains(page.FindAll("[title]"), e => e.GetAttribute("title") == definition);
+    }
+
+    [Fact]
+    public void For_UnknownField_IsNull()
+    {
+        Assert.Null(InputHelp.For("windings-0-nothing"));
+        Assert.Null(InputHelp.For(null));
+    }
+}
