@@ -84,4 +84,30 @@ public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
         await Assertions.Expect(reloaded.Locator("#windings-0-turns")).ToHaveValueAsync("40");
         await Assertions.Expect(reloaded.Locator("#plan-name")).ToHaveValueAsync("Long-wire receive, 40 turns");
     }
+
+    [SkippableFact]
+    public async Task MakeAVariant_AndCompareItWithTheOriginal()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/plan?demo=club-long-wire-receive"));
+        await Assertions.Expect(page.Locator("#windings-0-turns")).ToHaveValueAsync("12");
+        await page.Locator("#plan-name").FillAsync("Receive transformer, original");
+        await page.GetByTestId("save-plan").ClickAsync();
+        await Assertions.Expect(page.GetByTestId("save-message")).ToContainTextAsync("Saved");
+
+        await page.Locator("#windings-0-turns").FillAsync("16");
+        await Assertions.Expect(page.Locator("[data-testid=value-w0-turns-per-layer]")).ToContainTextAsync("16");
+        await page.GetByTestId("save-variant").ClickAsync();
+        await Assertions.Expect(page.GetByTestId("save-message")).ToContainTextAsync("Saved");
+        await page.GetByTestId("compare-select").ClickAsync();
+        await page.GetByRole(AriaRole.Option, new PageGetByRoleOptions { Name = "Receive transformer, original" }).ClickAsync();
+        await page.Keyboard.PressAsync("Escape");
+
+        var table = page.GetByTestId("variant-table");
+        await Assertions.Expect(table).ToContainTextAsync("Receive transformer, original (variant)");
+        await Assertions.Expect(table).ToContainTextAsync("16 :");
+        await Assertions.Expect(table).ToContainTextAsync("12 :");
+        await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "variant-compare.png"), FullPage = true });
+    }
 }
+
