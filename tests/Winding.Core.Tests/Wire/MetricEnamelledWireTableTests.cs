@@ -134,7 +134,7 @@ public sealed class MetricEnamelledWireTableTests
     [Fact]
     public void Rows_InsulationIncreaseNeverShrinksWithSize()
     {
-        // A transcription check, not a sourced rule: in every row read or cross-checked (physics-sources.md §3.3) the
+        // A copying check on our table, not a sourced rule: in every row read or cross-checked (physics-sources.md §3.3) the
         // increase (maximum overall − nominal) grows or stays equal from one size to the next, so a row that breaks
         // this is most likely mistyped.
         var sizes = MetricEnamelledWireTable.Sizes;
