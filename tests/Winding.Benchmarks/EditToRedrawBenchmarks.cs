@@ -33,8 +33,7 @@ public class EditToRedrawBenchmarks : IDisposable
         _context.Services.AddSingleton(paths);
         _context.Services.AddSingleton(new CatalogueProvider(paths, TimeProvider.System, NullLogger<CatalogueProvider>.Instance));
         _context.Services.AddSingleton(new Winding.Catalogue.Plans.PlanStore(paths.DataDirectory, TimeProvider.System));
-        _context.Services.AddScoped<PlanningState>();
-        _context.Services.AddTransient<SavedPlansModel>();
+        _context.Services.AddWindingViewModels();
         _context.JSInterop.Mode = JSRuntimeMode.Loose;
         _context.SetRendererInfo(new RendererInfo("Server", isInteractive: true));
         _page = _context.Render<PlanPage>();

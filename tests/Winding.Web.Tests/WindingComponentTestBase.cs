@@ -23,8 +23,7 @@ public abstract class WindingComponentTestBase : BunitContext, IAsyncLifetime
         Services.AddSingleton(paths);
         Services.AddSingleton(new CatalogueProvider(paths, TimeProvider.System, NullLogger<CatalogueProvider>.Instance));
         Services.AddSingleton(new Winding.Catalogue.Plans.PlanStore(paths.DataDirectory, TimeProvider.System));
-        Services.AddScoped<PlanningState>();
-        Services.AddTransient<SavedPlansModel>();
+        Services.AddWindingViewModels();
         JSInterop.Mode = JSRuntimeMode.Loose;
         SetRendererInfo(new RendererInfo("Server", isInteractive: true));
     }

@@ -40,6 +40,15 @@ public static class WindingHostingExtensions
         services.AddSingleton<CatalogueProvider>();
         services.AddSingleton(sp => new Winding.Catalogue.Plans.PlanStore(sp.GetRequiredService<WindingPaths>().DataDirectory, sp.GetRequiredService<TimeProvider>()));
         services.AddSingleton(TimeProvider.System);
+        return services.AddWindingViewModels();
+    }
+
+    /// <summary>
+    /// Registers the pages' view models: per-circuit state (scoped) and the start page's plan list. The tests and the
+    /// edit-to-redraw benchmark use this too, so they render the pages with the app's own set.
+    /// </summary>
+    public static IServiceCollection AddWindingViewModels(this IServiceCollection services)
+    {
         services.AddScoped<PlanningState>();
         services.AddTransient<SavedPlansModel>();
         services.AddScoped<Characterising.CharacterisationState>();

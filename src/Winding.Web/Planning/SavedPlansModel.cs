@@ -50,24 +50,17 @@ public sealed class SavedPlansModel(PlanStore plans)
     public void Import(string fileName, string json)
     {
         ArgumentNullException.ThrowIfNull(json);
-        var result = plans.Import(json);
-        if (!result.Succeeded && result.Errors.Count > 0)
-        {
-            var details = string.Join("; ", result.Errors.Select(e => (e.Field.Length == 0 ? "the file" : e.Field) + ": " + e.Message));
-            Message = ($"'{fileName}' was not imported. {details}", false);
-            List = plans.List();
-            return;
-        }
-
-        Report(result);
+        Report(plans.Import(json), $"'{fileName}' was not imported. ");
     }
 
     /// <summary>Says that a file was too large or could not be read.</summary>
     public void ImportFailed(string fileName, string reason) => Message = ($"'{fileName}' was not imported: {reason}", false);
 
-    private void Report(StoreResult result)
+    private void Report(StoreResult result, string failurePrefix = "")
     {
-        Message = (result.Succeeded || result.Errors.Count == 0 ? result.Message : string.Join("; ", result.Errors.Select(e => e.Field + ": " + e.Message)), result.Succeeded);
+        Message = result.Succeeded || result.Errors.Count == 0
+            ? (result.Message, result.Succeeded)
+            : (failurePrefix + string.Join("; ", result.Errors.Select(e => (e.Field.Length == 0 ? "the file" : e.Field) + ": " + e.Message)), false);
         List = plans.List();
     }
 }
