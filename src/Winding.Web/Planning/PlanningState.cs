@@ -103,6 +103,10 @@ public sealed class PlanningState
         Recalculate();
     }
 
+    /// <summary>How many times the plan has been read and evaluated (shown on the page so a browser can tell when fresh
+    /// results have arrived).</summary>
+    public int EvaluationCount { get; private set; }
+
     /// <summary>Changes one winding and recalculates.</summary>
     public void EditWinding(int index, Action<WindingDraft> edit)
     {
@@ -422,6 +426,7 @@ public sealed class PlanningState
 
     private void Recalculate()
     {
+        EvaluationCount++;
         _errors.Clear();
         Result = null;
         Plan = null;
