@@ -21,7 +21,7 @@ public static partial class InputHelp
         ["ambient"] = "Air temperature around the core, °C; the estimated temperature rise is added to it.",
         ["duty-cycle"] = "Fraction of each period the pulse is on (0 … 1); the volt-seconds of the longest on-time set the peak flux.",
         ["turns"] = "Whole turns through the core. On a ring core each pass through the hole is one turn (common practice, no source).",
-        ["conductor"] = "Bare copper diameter as on the spool label (IEC 60317 nominal for a metric wire; ASTM B258 for AWG, e.g. AWG 24 = 0.0201 in). " + Units + " Accepts 0.4 or 0,4.",
+        ["conductor"] = "Bare copper diameter as on the spool label (IEC 60317 nominal for a metric wire; ASTM B258 for AWG, e.g. AWG 24 = 0.0201 in). Accepts 0.4 or 0,4. " + Units,
         ["overall"] = "Diameter over the enamel or insulation: what sets how many turns fit per layer. Empty: the IEC 60317-0-1 grade 1 build is assumed. " + Units,
         ["in-hand"] = "Identical wires wound side by side as one turn (parallel strands): more copper area, same turns. Empty: 1.",
         ["current"] = "RMS current in this winding, A; empty to derive it from the drive and load (first and last winding).",

@@ -64,11 +64,11 @@ public static class LengthConversion
             return value;
         }
 
-        return TryExact(value, out var exact) ? ToMillimetres(exact, unit) : value * (double)MillimetresPer(unit);
+        return TryExact(value, out var exact) ? DecimalToMillimetres(exact, unit) : value * (double)MillimetresPer(unit);
     }
 
     /// <summary>An exact decimal amount of <paramref name="unit"/>s in millimetres, rounded to a double once.</summary>
-    public static double ToMillimetres(decimal value, LengthUnit unit) => ToDouble(value * MillimetresPer(unit));
+    public static double DecimalToMillimetres(decimal value, LengthUnit unit) => ToDouble(value * MillimetresPer(unit));
 
     /// <summary>
     /// <paramref name="millimetres"/> in <paramref name="unit"/> as a decimal with 28–29 significant digits (exact where

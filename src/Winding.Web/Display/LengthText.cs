@@ -60,7 +60,7 @@ public static partial class LengthText
 
         var millimetres = unit == LengthUnit.Millimetre ? value
             : decimal.TryParse(digits, NumberStyles.Float, CultureInfo.InvariantCulture, out var exact) && (exact != 0 || value == 0) && Math.Abs(value) < 1e15
-                ? LengthConversion.ToMillimetres(exact, unit)
+                ? LengthConversion.DecimalToMillimetres(exact, unit)
                 : LengthConversion.ToMillimetres(value, unit);
         return double.IsFinite(millimetres) ? new(millimetres, unit, null) : new(null, unit, "is too large to be a length");
     }
