@@ -45,6 +45,31 @@ public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
         await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "plan-page-recovered.png") });
     }
 
+    [SkippableFact]
+    public async Task UnitSwitch_Inches_FieldsAndResultsFollow_AndTheChoiceSurvivesAReload()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/plan"));
+        var label = page.Locator("label[for=windings-0-conductor]");
+        await Assertions.Expect(label).ToContainTextAsync("Conductor (mm)");
+
+        await page.GetByTestId("unit-system").ClickAsync();
+
+        await Assertions.Expect(label).ToContainTextAsync("Conductor (in)");
+        // 0.5 mm = 0.019685 in to six digits; 0.02 in typed = 0.508 mm (1 in = 25.4 mm exactly).
+        await Assertions.Expect(page.Locator("#windings-0-conductor")).ToHaveValueAsync("0.019685");
+        await page.Locator("#windings-0-conductor").FillAsync("0.02");
+        await Assertions.Expect(page.Locator("[data-testid=value-w0-wire]")).ToContainTextAsync("0.0200 in over");
+        await Assertions.Expect(page.GetByTestId("cross-section-scale")).ToContainTextAsync(" in");
+        await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "plan-page-inches.png"), FullPage = true });
+
+        await page.ReloadAsync();
+        await page.Locator("#app-content[data-interactive=true]").WaitForAsync(new LocatorWaitForOptions { Timeout = 30_000 });
+
+        await Assertions.Expect(page.GetByTestId("unit-system")).ToHaveAttributeAsync("aria-pressed", "true");
+        await Assertions.Expect(label).ToContainTextAsync("Conductor (in)");
+    }
+
     /// <summary>What the API answers for the same plan, formatted as the page formats it.</summary>
     private async Task<string> ExpectedInductance(int turns)
     {

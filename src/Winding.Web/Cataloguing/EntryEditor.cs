@@ -71,7 +71,10 @@ public sealed class EntryEditor
     /// <summary>Material: resistivity in Ω·m as typed.</summary>
     public string Resistivity { get; set; } = string.Empty;
 
-    /// <summary>Core: the shape's dimension fields (name → text in mm), in the order the shape uses them.</summary>
+    /// <summary>
+    /// Core: the shape's dimension fields (name → text as typed: a plain number is mm, a typed unit wins,
+    /// <see cref="LengthText"/>), in the order the shape uses them.
+    /// </summary>
     public IReadOnlyDictionary<string, string> Dimensions => _dimensions;
 
     /// <summary>Versions kept for this entry.</summary>
@@ -115,7 +118,7 @@ public sealed class EntryEditor
             MaterialId = core.MaterialId ?? string.Empty;
             foreach (var (name, value) in DimensionFields(core.Shape, core.DimensionsMm))
             {
-                _dimensions[name] = value?.ToString("0.####", CultureInfo.InvariantCulture) ?? string.Empty;
+                _dimensions[name] = LengthText.ForDraft(value);
             }
         }
         else
@@ -156,7 +159,7 @@ public sealed class EntryEditor
             core.DimensionsMm ??= new DimensionsMmDocument();
             foreach (var (name, text) in _dimensions)
             {
-                var value = Parse($"dimensionsMm.{name}", text);
+                var value = ParseLength($"dimensionsMm.{name}", text);
                 typeof(DimensionsMmDocument).GetProperty(char.ToUpperInvariant(name[0]) + name[1..])!.SetValue(core.DimensionsMm, value);
             }
 
@@ -273,6 +276,22 @@ public sealed class EntryEditor
         }
 
         return value;
+    }
+
+    private double? ParseLength(string field, string text)
+    {
+        if (string.IsNullOrWhiteSpace(text))
+        {
+            return null;
+        }
+
+        var reading = LengthText.Read(text, LengthUnit.Millimetre);
+        if (reading.Millimetres is null)
+        {
+            _errors[field] = $"'{text.Trim()}' {reading.Problem}.";
+        }
+
+        return reading.Millimetres;
     }
 
     private void Report(bool succeeded, string message)

@@ -33,16 +33,16 @@ public sealed class CharacterisationState
     /// <summary><c>toroid</c> or <c>sleeve</c>.</summary>
     public string Shape { get; set; } = CoreShapes.Sleeve;
 
-    /// <summary>Outer diameter (mm) as typed.</summary>
+    /// <summary>Outer diameter as typed (a plain number is mm; a typed unit wins, <see cref="LengthText"/>).</summary>
     public string OuterDiameter { get; set; } = string.Empty;
 
-    /// <summary>Inner diameter or bore (mm) as typed.</summary>
+    /// <summary>Inner diameter or bore as typed, like the outer diameter.</summary>
     public string InnerDiameter { get; set; } = string.Empty;
 
-    /// <summary>Height of a toroid or length of a sleeve (mm) as typed.</summary>
+    /// <summary>Height of a toroid or length of a sleeve as typed, like the outer diameter.</summary>
     public string Length { get; set; } = string.Empty;
 
-    /// <summary>Residual gap of a split sleeve (mm) as typed; empty for a solid core.</summary>
+    /// <summary>Residual gap of a split sleeve as typed, like the outer diameter; empty for a solid core.</summary>
     public string ResidualGap { get; set; } = string.Empty;
 
     /// <summary>Turns of the test winding as typed.</summary>
@@ -140,8 +140,8 @@ public sealed class CharacterisationState
             {
                 Shape = Shape,
                 DimensionsMm = Shape == CoreShapes.Toroid
-                    ? new DimensionsMmDocument { OuterDiameter = Number("core.dimensionsMm.outerDiameter", OuterDiameter, "mm"), InnerDiameter = Number("core.dimensionsMm.innerDiameter", InnerDiameter, "mm"), Height = Number("core.dimensionsMm.height", Length, "mm") }
-                    : new DimensionsMmDocument { OuterDiameter = Number("core.dimensionsMm.outerDiameter", OuterDiameter, "mm"), InnerDiameter = Number("core.dimensionsMm.innerDiameter", InnerDiameter, "mm"), Length = Number("core.dimensionsMm.length", Length, "mm"), ResidualGap = string.IsNullOrWhiteSpace(ResidualGap) ? null : Number("core.dimensionsMm.residualGap", ResidualGap, "mm") },
+                    ? new DimensionsMmDocument { OuterDiameter = LengthMm("core.dimensionsMm.outerDiameter", OuterDiameter), InnerDiameter = LengthMm("core.dimensionsMm.innerDiameter", InnerDiameter), Height = LengthMm("core.dimensionsMm.height", Length) }
+                    : new DimensionsMmDocument { OuterDiameter = LengthMm("core.dimensionsMm.outerDiameter", OuterDiameter), InnerDiameter = LengthMm("core.dimensionsMm.innerDiameter", InnerDiameter), Length = LengthMm("core.dimensionsMm.length", Length), ResidualGap = string.IsNullOrWhiteSpace(ResidualGap) ? null : LengthMm("core.dimensionsMm.residualGap", ResidualGap) },
             },
             Turns = (int?)Number("turns", Turns, string.Empty),
             FrequencyHz = Number("frequencyHz", Frequency, "Hz"),
@@ -187,7 +187,7 @@ public sealed class CharacterisationState
         // The measured μe of a split sleeve includes its residual gap; the material keeps the intrinsic μi, found by
         // inverting μe = μi/(1 + μi·g/le) (Snelling 1988): μi = μe/(1 − μe·g/le). Where the gap alone would explain
         // the measurement the gap is left out and the measured μe kept.
-        var gapMm = Shape == CoreShapes.Sleeve && !string.IsNullOrWhiteSpace(ResidualGap) ? Number("x", ResidualGap, "mm") ?? 0 : 0;
+        var gapMm = Shape == CoreShapes.Sleeve && !string.IsNullOrWhiteSpace(ResidualGap) ? LengthMm("x", ResidualGap) ?? 0 : 0;
         var share = measuredMu.Value * gapMm * 1e-3 / Result.Effective.EffectiveLengthM;
         var keepGap = gapMm > 0 && share < 0.95;
         var intrinsicMu = keepGap ? measuredMu.Value / (1 - share) : measuredMu.Value;
@@ -230,8 +230,8 @@ public sealed class CharacterisationState
             Name = SaveName.Trim(),
             Shape = Shape,
             DimensionsMm = Shape == CoreShapes.Toroid
-                ? new DimensionsMmDocument { OuterDiameter = Number("x", OuterDiameter, "mm"), InnerDiameter = Number("x", InnerDiameter, "mm"), Height = Number("x", Length, "mm") }
-                : new DimensionsMmDocument { OuterDiameter = Number("x", OuterDiameter, "mm"), InnerDiameter = Number("x", InnerDiameter, "mm"), Length = Number("x", Length, "mm"), ResidualGap = keepGap ? gapMm : null },
+                ? new DimensionsMmDocument { OuterDiameter = LengthMm("x", OuterDiameter), InnerDiameter = LengthMm("x", InnerDiameter), Height = LengthMm("x", Length) }
+                : new DimensionsMmDocument { OuterDiameter = LengthMm("x", OuterDiameter), InnerDiameter = LengthMm("x", InnerDiameter), Length = LengthMm("x", Length), ResidualGap = keepGap ? gapMm : null },
             MaterialId = material.Id,
             Source = "Caliper reading and test winding. " + provenance,
         };
@@ -259,6 +259,24 @@ public sealed class CharacterisationState
         var slug = string.Join('-', new string(chars).Split('-', StringSplitOptions.RemoveEmptyEntries));
         slug = slug.Length > 60 ? slug[..60].Trim('-') : slug;
         return EntryId.IsValid(slug) ? slug : "salvaged-core";
+    }
+
+    /// <summary>A caliper dimension as typed (a plain number is mm; "0.5 in", "20 mil" carry their unit) in mm.</summary>
+    private double? LengthMm(string path, string text)
+    {
+        if (string.IsNullOrWhiteSpace(text))
+        {
+            _errors[path] = "Required.";
+            return null;
+        }
+
+        var reading = LengthText.Read(text, LengthUnit.Millimetre);
+        if (reading.Millimetres is null)
+        {
+            _errors[path] = $"'{text.Trim()}' {reading.Problem}.";
+        }
+
+        return reading.Millimetres;
     }
 
     private double? Number(string path, string text, string unit)

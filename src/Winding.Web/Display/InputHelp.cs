@@ -8,6 +8,9 @@ namespace Winding.Web.Display;
 /// </summary>
 public static partial class InputHelp
 {
+    /// <summary>The sentence every length field's tooltip ends with.</summary>
+    public const string Units = "In mm or inches as chosen with mm / inch at the top; a unit typed after the number wins: 0.5 mm, 0.02 in, 20 mil, 0.02\". \"m\" alone is refused (milli or metres?).";
+
     private static readonly Dictionary<string, string> Definitions = new(StringComparer.Ordinal)
     {
         ["min-frequency"] = "Lowest frequency of the band: the worst case for magnetising reactance and flux density (B = V/(4.44·f·N·Ae) for a sine, Faraday's law). Accepts 1.8 MHz, 1800k, 1.8e6.",
@@ -18,13 +21,32 @@ public static partial class InputHelp
         ["ambient"] = "Air temperature around the core, °C; the estimated temperature rise is added to it.",
         ["duty-cycle"] = "Fraction of each period the pulse is on (0 … 1); the volt-seconds of the longest on-time set the peak flux.",
         ["turns"] = "Whole turns through the core. On a ring core each pass through the hole is one turn (common practice, no source).",
-        ["conductor"] = "Bare copper diameter, mm, as on the spool label (IEC 60317 nominal for a standard wire). Accepts 0.4 or 0,4.",
-        ["overall"] = "Diameter over the enamel or insulation, mm: what sets how many turns fit per layer. Empty: the IEC 60317-0-1 grade 1 build is assumed.",
+        ["conductor"] = "Bare copper diameter as on the spool label (IEC 60317 nominal for a metric wire; ASTM B258 for AWG, e.g. AWG 24 = 0.0201 in). Accepts 0.4 or 0,4. " + Units,
+        ["overall"] = "Diameter over the enamel or insulation: what sets how many turns fit per layer. Empty: the IEC 60317-0-1 grade 1 build is assumed. " + Units,
         ["in-hand"] = "Identical wires wound side by side as one turn (parallel strands): more copper area, same turns. Empty: 1.",
         ["current"] = "RMS current in this winding, A; empty to derive it from the drive and load (first and last winding).",
         ["sector-start"] = "Where this winding's sector begins, degrees around a ring core.",
         ["sector-end"] = "Where this winding's sector ends, degrees around a ring core.",
-        ["wrap-thickness"] = "Total thickness of the insulation wrapped over this winding, mm; it adds distance (less capacitance, more leakage).",
+        ["wrap-thickness"] = "Total thickness of the insulation wrapped over this winding; it adds distance (less capacitance, more leakage). " + Units,
+        ["measure-od"] = "Outer diameter of the core, measured with a caliper. " + Units,
+        ["measure-id"] = "Inner diameter of a toroid, or the bore of a sleeve, measured with a caliper. " + Units,
+        ["measure-length"] = "Height of a toroid, or length of a sleeve along its bore, measured with a caliper. " + Units,
+        ["measure-gap"] = "Split sleeves: the two faces' residual gaps added together. " + Units,
+        ["edit-outerDiameter"] = "Outer diameter of the ring or sleeve (IEC 60205 dimension). " + Units,
+        ["edit-innerDiameter"] = "Inner diameter of the ring, or bore of the sleeve. " + Units,
+        ["edit-height"] = "Height of the ring, or of a two-hole core. " + Units,
+        ["edit-coatingThickness"] = "Thickness of the ring's coating (paint or parylene); it narrows the hole. " + Units,
+        ["edit-length"] = "Length of the sleeve or two-hole core along its holes. " + Units,
+        ["edit-residualGap"] = "Split sleeves: both faces' residual gaps together; empty or 0 for a solid sleeve. " + Units,
+        ["edit-holeDiameter"] = "Diameter of each hole of a two-hole core. " + Units,
+        ["edit-holeSpacing"] = "Distance between the centres of the two holes. " + Units,
+        ["edit-width"] = "Width of a two-hole core across both holes. " + Units,
+        ["edit-windowBreadth"] = "Bobbin window breadth along the leg: the room for the turns of one layer. " + Units,
+        ["edit-windowHeight"] = "Bobbin window height from the leg outwards: the room for the layers. " + Units,
+        ["edit-legDiameter"] = "Diameter of a round centre leg. " + Units,
+        ["edit-legWidth"] = "Width of a rectangular centre leg. " + Units,
+        ["edit-legDepth"] = "Depth of a rectangular centre leg. " + Units,
+        ["edit-bobbinWall"] = "Thickness of the bobbin wall between the leg and the first layer. " + Units,
         ["taps"] = "Turn counts at which a tap is brought out, counted from the winding's start, separated by commas.",
     };
 

@@ -7,14 +7,17 @@ namespace Winding.Web.Display;
 /// <summary>Turns an evaluation into the titled, formatted sections the results panel shows.</summary>
 public static class ResultRows
 {
-    /// <summary>Sections for the core, each winding, the band and the operating point.</summary>
-    public static IReadOnlyList<ResultSection> For(PlanEvaluation evaluation, string materialName, double alTolerance)
+    /// <summary>
+    /// Sections for the core, each winding, the band and the operating point; lengths, areas and wires in
+    /// <paramref name="units"/> (electrical figures are SI in both systems).
+    /// </summary>
+    public static IReadOnlyList<ResultSection> For(PlanEvaluation evaluation, string materialName, double alTolerance, UnitSystem units = UnitSystem.Metric)
     {
         ArgumentNullException.ThrowIfNull(evaluation);
-        var sections = new List<ResultSection> { Core(evaluation.Core, materialName, alTolerance) };
+        var sections = new List<ResultSection> { Core(evaluation.Core, materialName, alTolerance, units) };
         for (var i = 0; i < evaluation.Windings.Count; i++)
         {
-            sections.Add(Winding(evaluation.Windings[i], i));
+            sections.Add(Winding(evaluation.Windings[i], i, units));
         }
 
         if (evaluation.TurnsRatio is not null || evaluation.Magnetizing is not null)
@@ -36,17 +39,17 @@ public static class ResultRows
         return sections;
     }
 
-    private static ResultSection Core(CoreEvaluation core, string materialName, double alTolerance) => new("core", "Core", [
+    private static ResultSection Core(CoreEvaluation core, string materialName, double alTolerance, UnitSystem units) => new("core", "Core", [
         new("shape", "Shape", core.ShapeName + " · " + materialName, "The core's shape and material class."),
         new("al", "AL", EngineeringFormat.Format(core.InductanceFactor.HenriesPerTurnSquared, "H") + "/turn² ± " + Fixed(alTolerance * 100, 0) + " %", "Inductance per turn squared, AL = μ0·μe·Ae/le (IEC 60205), with the material's AL tolerance."),
         new("mue", "Effective permeability μe", Fixed(core.EffectivePermeability, 1), "μi, reduced by an air gap as μi/(1 + μi·g/le) (Snelling 1988)."),
-        new("le", "Effective length le", Fixed(core.Effective.EffectiveLengthM * 1e3, 2) + " mm", "Effective magnetic path length (IEC 60205)."),
-        new("ae", "Effective area Ae", Fixed(core.Effective.EffectiveAreaM2 * 1e6, 2) + " mm²", "Effective cross-section (IEC 60205)."),
-        new("ve", "Effective volume Ve", Fixed(core.Effective.EffectiveVolumeM3 * 1e9, 0) + " mm³", "Effective volume le·Ae (IEC 60205)."),
-        new("window", "Window area", Fixed(core.WindowAreaM2 * 1e6, 2) + " mm²", "Area the windings pass through."),
+        new("le", "Effective length le", LengthFormat.Dimension(core.Effective.EffectiveLengthM * 1e3, units, 2), "Effective magnetic path length (IEC 60205)."),
+        new("ae", "Effective area Ae", LengthFormat.Area(core.Effective.EffectiveAreaM2 * 1e6, units, 2), "Effective cross-section (IEC 60205)."),
+        new("ve", "Effective volume Ve", LengthFormat.Volume(core.Effective.EffectiveVolumeM3 * 1e9, units, 0), "Effective volume le·Ae (IEC 60205)."),
+        new("window", "Window area", LengthFormat.Area(core.WindowAreaM2 * 1e6, units, 2), "Area the windings pass through."),
     ]);
 
-    private static ResultSection Winding(WindingEvaluation w, int index)
+    private static ResultSection Winding(WindingEvaluation w, int index, UnitSystem units)
     {
         var key = $"w{index}-";
         var rows = new List<ResultRow>
@@ -58,25 +61,25 @@ public static class ResultRows
         };
         if (w.Fit.RemainingHoleDiameter is { } hole)
         {
-            rows.Add(new(key + "hole-left", "Hole left", Fixed(hole.Millimetres, 2) + " mm", "Diameter of the hole left after this winding."));
+            rows.Add(new(key + "hole-left", "Hole left", LengthFormat.Dimension(hole.Millimetres, units, 2), "Diameter of the hole left after this winding."));
         }
 
         if (w.Fit.RemainingWindowHeightM is { } height)
         {
-            rows.Add(new(key + "height-left", "Window height left", Fixed(height * 1e3, 2) + " mm", "Bobbin window height left after this winding."));
+            rows.Add(new(key + "height-left", "Window height left", LengthFormat.Dimension(height * 1e3, units, 2), "Bobbin window height left after this winding."));
         }
 
-        rows.Add(new(key + "wire", "Wire", w.Wire.Description + (w.Wire.ElementsInHand > 1 ? $", {w.Wire.ElementsInHand} in hand" : string.Empty), "The wire as the engine understood it."));
+        rows.Add(new(key + "wire", "Wire", WireText.Describe(w.Wire, units) + (w.Wire.ElementsInHand > 1 ? $", {w.Wire.ElementsInHand} in hand" : string.Empty), "The wire as the engine understood it."));
         rows.Add(new(key + "fill", "Copper fill", Fixed(w.FillFactor * 100, 1) + " %", "Copper cross-section of this winding over the window area."));
-        rows.Add(new(key + "mlt", "Mean turn length", Fixed(w.Fit.MeanTurnLengthM * 1e3, 1) + " mm", "Perimeter of the core section grown by the build under the turn."));
-        rows.Add(new(key + "wire-length", "Wire to cut", Fixed(w.WireLengthM * 1e3, 0) + " mm", "N·MLT plus the margin, plus two leads."));
+        rows.Add(new(key + "mlt", "Mean turn length", LengthFormat.Dimension(w.Fit.MeanTurnLengthM * 1e3, units, 1), "Perimeter of the core section grown by the build under the turn."));
+        rows.Add(new(key + "wire-length", "Wire to cut", LengthFormat.CutLength(w.WireLengthM * 1e3, units), "N·MLT plus the margin, plus two leads."));
         rows.Add(new(key + "rdc", "DC resistance (20 °C)", EngineeringFormat.Format(w.DcResistanceOhm, "Ω"), "ρ·ℓ/A of the length to cut (IEC 60028 copper)."));
         if (w.Electrical is { } e)
         {
             rows.Add(new(key + "rac", "AC resistance (f max)", EngineeringFormat.Format(e.AcResistanceOhm, "Ω") + " (×" + Fixed(e.AcFactor.RacPerRdc, 2) + ")", "Skin and proximity effect at the top of the band: Dowell 1966 with the round-wire porosity, or per strand for Litz."));
-            rows.Add(new(key + "skin", "Skin depth (f max)", EngineeringFormat.Format(e.SkinDepthM, "m") + " · d/δ = " + Fixed(e.AcFactor.SkinDepthRatio, 1), "δ = √(ρ/(π·f·μ0)); conductors much thicker than 2δ waste copper."));
+            rows.Add(new(key + "skin", "Skin depth (f max)", LengthFormat.SkinDepth(e.SkinDepthM, units) + " · d/δ = " + Fixed(e.AcFactor.SkinDepthRatio, 1), "δ = √(ρ/(π·f·μ0)); conductors much thicker than 2δ waste copper."));
             rows.Add(new(key + "current", "RMS current", EngineeringFormat.Format(e.RmsCurrentA, "A") + (e.CurrentStated ? " (stated)" : " (from drive and load)"), "Stated, or derived from the drive and load through an ideal transformer."));
-            rows.Add(new(key + "density", "Current density", Fixed(e.CurrentDensityAPerM2 / 1e6, 2) + " A/mm²", "RMS current over the copper cross-section; about 4 A/mm² is a common limit for small windings."));
+            rows.Add(new(key + "density", "Current density", LengthFormat.CurrentDensity(e.CurrentDensityAPerM2, units), "RMS current over the copper cross-section; about 4 A/mm² (some 500 circular mils per ampere) is a common limit for small windings (common practice, no source)."));
             rows.Add(new(key + "copper-loss", "Copper loss", EngineeringFormat.Format(e.CopperLossW, "W"), "I²·Rac."));
         }
 

@@ -2,6 +2,7 @@ using System.Globalization;
 using Winding.Core.Geometry;
 using Winding.Core.Plans;
 using Winding.Core.Windings;
+using Winding.Web.Display;
 
 namespace Winding.Web.Drawing;
 
@@ -18,6 +19,8 @@ namespace Winding.Web.Drawing;
 /// inwards (a simple drawing packing, not the fit's area rule).</item>
 /// </list>
 /// A layer with more than <see cref="MaximumTurnsPerLayer"/> turns shows only every n-th turn and says so in a caption.
+/// The geometry is always in millimetres; only the dimension label and the scale bar follow the unit system (in imperial
+/// the bar is a round length in inches, drawn at its length in millimetres).
 /// </summary>
 /// <param name="MinXMm">Left edge of the view box, mm.</param>
 /// <param name="MinYMm">Top edge of the view box, mm.</param>
@@ -60,9 +63,9 @@ public sealed record CrossSectionModel(
     /// <summary>A length in mm written for SVG: invariant culture, at most four decimals.</summary>
     public static string Number(double valueMm) => valueMm.ToString("0.####", CultureInfo.InvariantCulture);
 
-    /// <summary>Builds the drawing of <paramref name="plan"/> from its evaluation.</summary>
+    /// <summary>Builds the drawing of <paramref name="plan"/> from its evaluation, labelled in <paramref name="units"/>.</summary>
     /// <exception cref="ArgumentException">The evaluation does not have one result per winding of the plan.</exception>
-    public static CrossSectionModel For(TransformerPlan plan, PlanEvaluation evaluation)
+    public static CrossSectionModel For(TransformerPlan plan, PlanEvaluation evaluation, UnitSystem units = UnitSystem.Metric)
     {
         ArgumentNullException.ThrowIfNull(plan);
         ArgumentNullException.ThrowIfNull(evaluation);
@@ -75,10 +78,10 @@ public sealed record CrossSectionModel(
         var shape = plan.Core.WoundGeometry;
         var (rectangles, rings, layers, labelText, bounds) = shape switch
         {
-            ToroidCore toroid => Ring(plan, evaluation, toroid.OuterDiameter.Millimetres, toroid.InnerDiameter.Millimetres, toroid.CoatingThickness.Millimetres, "OD {0} mm, ID {1} mm"),
-            SleeveCore sleeve => Ring(plan, evaluation, sleeve.OuterDiameter.Millimetres, sleeve.BoreDiameter.Millimetres, 0, "OD {0} mm, bore {1} mm"),
-            BobbinCore bobbin => Bobbin(plan, evaluation, bobbin),
-            TwoHoleCore twoHole => TwoHole(plan, evaluation, twoHole, captions),
+            ToroidCore toroid => Ring(plan, evaluation, toroid.OuterDiameter.Millimetres, toroid.InnerDiameter.Millimetres, toroid.CoatingThickness.Millimetres, "OD {0} {2}, ID {1} {2}", units),
+            SleeveCore sleeve => Ring(plan, evaluation, sleeve.OuterDiameter.Millimetres, sleeve.BoreDiameter.Millimetres, 0, "OD {0} {2}, bore {1} {2}", units),
+            BobbinCore bobbin => Bobbin(plan, evaluation, bobbin, units),
+            TwoHoleCore twoHole => TwoHole(plan, evaluation, twoHole, captions, units),
             _ => throw new ArgumentOutOfRangeException(nameof(plan), shape, "Unknown core shape."),
         };
 
@@ -108,9 +111,8 @@ public sealed record CrossSectionModel(
         var margin = 0.06 * size;
         var band = 0.14 * size;
         var fontMm = 0.045 * size;
-        var barMm = NiceLength(size / 4);
         var barY = minY + height + margin + band * 0.35;
-        var scale = new ScaleBar(minX, barY, barMm, string.Create(CultureInfo.InvariantCulture, $"{barMm:0.###} mm"));
+        var scale = Bar(minX, barY, size / 4, units);
         var labels = new List<DrawingLabel> { new(minX + width, barY + fontMm * 0.4, labelText, fontMm, true) };
         return new CrossSectionModel(
             minX - margin,
@@ -127,15 +129,25 @@ public sealed record CrossSectionModel(
             captions);
     }
 
-    /// <summary>The largest of 1, 2 or 5 × 10ⁿ mm not above <paramref name="targetMm"/>.</summary>
-    private static double NiceLength(double targetMm)
+    /// <summary>
+    /// The scale bar: the largest of 1, 2 or 5 × 10ⁿ of the system's unit (mm or in) not above <paramref name="targetMm"/>.
+    /// </summary>
+    private static ScaleBar Bar(double xMm, double yMm, double targetMm, UnitSystem units)
     {
-        var power = Math.Pow(10, Math.Floor(Math.Log10(targetMm)));
-        return targetMm >= 5 * power ? 5 * power : targetMm >= 2 * power ? 2 * power : power;
+        var mmPerUnit = units == UnitSystem.Imperial ? (double)LengthConversion.MillimetresPerInch : 1;
+        var length = NiceLength(targetMm / mmPerUnit);
+        return new ScaleBar(xMm, yMm, length * mmPerUnit, string.Create(CultureInfo.InvariantCulture, $"{length:0.####} {LengthFormat.Symbol(units)}"));
+    }
+
+    /// <summary>The largest of 1, 2 or 5 × 10ⁿ not above <paramref name="target"/>.</summary>
+    private static double NiceLength(double target)
+    {
+        var power = Math.Pow(10, Math.Floor(Math.Log10(target)));
+        return target >= 5 * power ? 5 * power : target >= 2 * power ? 2 * power : power;
     }
 
     private static (List<DrawnRectangle>, List<DrawnRing>, List<WireLayer>[], string, (double, double, double, double)) Ring(
-        TransformerPlan plan, PlanEvaluation evaluation, double outerMm, double holeMm, double coatingMm, string labelFormat)
+        TransformerPlan plan, PlanEvaluation evaluation, double outerMm, double holeMm, double coatingMm, string labelFormat, UnitSystem units)
     {
         var rings = new List<DrawnRing>();
         if (coatingMm > 0)
@@ -178,12 +190,12 @@ public sealed record CrossSectionModel(
         }
 
         var extentMm = outerMm / 2 + coatingMm;
-        var label = string.Format(CultureInfo.InvariantCulture, labelFormat, Number(outerMm), Number(holeMm));
+        var label = string.Format(CultureInfo.InvariantCulture, labelFormat, LengthFormat.DimensionNumber(outerMm, units), LengthFormat.DimensionNumber(holeMm, units), LengthFormat.Symbol(units));
         return ([], rings, layers, label, (-extentMm, -extentMm, 2 * extentMm, 2 * extentMm));
     }
 
     private static (List<DrawnRectangle>, List<DrawnRing>, List<WireLayer>[], string, (double, double, double, double)) Bobbin(
-        TransformerPlan plan, PlanEvaluation evaluation, BobbinCore core)
+        TransformerPlan plan, PlanEvaluation evaluation, BobbinCore core, UnitSystem units)
     {
         var breadthMm = core.WindowBreadth.Millimetres;
         var heightMm = core.WindowHeight.Millimetres;
@@ -224,12 +236,12 @@ public sealed record CrossSectionModel(
             }
         }
 
-        var label = string.Create(CultureInfo.InvariantCulture, $"window {Number(breadthMm)} × {Number(heightMm)} mm");
+        var label = $"window {LengthFormat.DimensionNumber(breadthMm, units)} × {LengthFormat.DimensionNumber(heightMm, units)} {LengthFormat.Symbol(units)}";
         return (rectangles, [], layers, label, (-legMm, 0, legMm + wallMm + heightMm, breadthMm));
     }
 
     private static (List<DrawnRectangle>, List<DrawnRing>, List<WireLayer>[], string, (double, double, double, double)) TwoHole(
-        TransformerPlan plan, PlanEvaluation evaluation, TwoHoleCore core, List<string> captions)
+        TransformerPlan plan, PlanEvaluation evaluation, TwoHoleCore core, List<string> captions, UnitSystem units)
     {
         var widthMm = core.Width.Millimetres;
         var heightMm = core.Height.Millimetres;
@@ -290,7 +302,8 @@ public sealed record CrossSectionModel(
             }
         }
 
-        var label = string.Create(CultureInfo.InvariantCulture, $"{Number(widthMm)} × {Number(heightMm)} mm, holes {Number(holeMm)} mm");
+        var symbol = LengthFormat.Symbol(units);
+        var label = $"{LengthFormat.DimensionNumber(widthMm, units)} × {LengthFormat.DimensionNumber(heightMm, units)} {symbol}, holes {LengthFormat.DimensionNumber(holeMm, units)} {symbol}";
         return (rectangles, rings, layers, label, (-widthMm / 2, -heightMm / 2, widthMm, heightMm));
     }
 

@@ -44,7 +44,8 @@ public static class WindingHostingExtensions
     }
 
     /// <summary>
-    /// Registers the pages' view models: per-circuit state (scoped) and the start page's plan list. The tests and the
+    /// Registers the pages' view models: per-circuit state (scoped), the start page's plan list, and the unit system
+    /// (<see cref="Display.DisplayUnits"/>, cascaded to every component as a <see cref="Display.UnitSystem"/>). The tests and the
     /// edit-to-redraw benchmark use this too, so they render the pages with the app's own set.
     /// </summary>
     public static IServiceCollection AddWindingViewModels(this IServiceCollection services)
@@ -52,6 +53,8 @@ public static class WindingHostingExtensions
         services.AddScoped<PlanningState>();
         services.AddTransient<SavedPlansModel>();
         services.AddScoped<Characterising.CharacterisationState>();
+        services.AddScoped<Display.DisplayUnits>();
+        services.AddCascadingValue(sp => sp.GetRequiredService<Display.DisplayUnits>().Source);
         return services;
     }
 

@@ -382,8 +382,8 @@ public sealed class PlanningState
                 Name = w.Name ?? string.Empty,
                 Turns = w.Turns?.ToString(CultureInfo.InvariantCulture) ?? string.Empty,
                 StandardId = wire?.StandardId,
-                ConductorDiameter = custom ? Show(wire!.ConductorDiameterMm) : string.Empty,
-                OverallDiameter = custom ? Show(wire!.OverallDiameterMm) : string.Empty,
+                ConductorDiameter = custom ? LengthText.ForDraft(wire!.ConductorDiameterMm) : string.Empty,
+                OverallDiameter = custom ? LengthText.ForDraft(wire!.OverallDiameterMm) : string.Empty,
                 StrandsInHand = wire?.StrandsInHand?.ToString(CultureInfo.InvariantCulture) ?? string.Empty,
                 RmsCurrent = Show(w.RmsCurrentA),
                 ImportedWire = wire is not null && wire.StandardId is null && !custom ? wire : null,
@@ -483,8 +483,8 @@ public sealed class PlanningState
             }
             else
             {
-                wire.ConductorDiameterMm = Number(errors, $"{prefix}.wire.conductorDiameterMm", draft.ConductorDiameter, "Conductor diameter", "mm", required: true);
-                wire.OverallDiameterMm = Number(errors, $"{prefix}.wire.overallDiameterMm", draft.OverallDiameter, "Overall diameter", "mm", required: false);
+                wire.ConductorDiameterMm = Length(errors, $"{prefix}.wire.conductorDiameterMm", draft.ConductorDiameter, "Conductor diameter", required: true);
+                wire.OverallDiameterMm = Length(errors, $"{prefix}.wire.overallDiameterMm", draft.OverallDiameter, "Overall diameter", required: false);
             }
 
             windings.Add(new PlanWindingDocument
@@ -551,6 +551,31 @@ public sealed class PlanningState
         }
 
         return value;
+    }
+
+    /// <summary>
+    /// A length field's draft text in millimetres: a plain number is millimetres, a number with a unit (mm, in, mil, ")
+    /// is converted exactly (<see cref="LengthText"/>). The page's length fields write such texts (<c>LengthField</c>).
+    /// </summary>
+    private static double? Length(Dictionary<string, string> errors, string path, string text, string label, bool required)
+    {
+        if (string.IsNullOrWhiteSpace(text))
+        {
+            if (required)
+            {
+                errors[path] = $"{label}: required, in mm or with a unit (0.5 mm, 0.02 in, 20 mil).";
+            }
+
+            return null;
+        }
+
+        var reading = LengthText.Read(text, LengthUnit.Millimetre);
+        if (reading.Millimetres is null)
+        {
+            errors[path] = $"{label}: '{text.Trim()}' {reading.Problem}.";
+        }
+
+        return reading.Millimetres;
     }
 
     private static List<int>? Taps(Dictionary<string, string> errors, string path, string text)

@@ -12,10 +12,10 @@ public sealed class WindingDraft
     /// <summary>A standard wire id chosen from the suggestions, or null for a custom wire.</summary>
     public string? StandardId { get; set; }
 
-    /// <summary>Custom wire: conductor diameter in mm as typed.</summary>
+    /// <summary>Custom wire: conductor diameter as typed (a plain number is mm; "0.02 in", "20 mil" carry their unit).</summary>
     public string ConductorDiameter { get; set; } = string.Empty;
 
-    /// <summary>Custom wire: overall diameter in mm as typed (empty: assume the enamel build).</summary>
+    /// <summary>Custom wire: overall diameter as typed, like the conductor (empty: assume the enamel build).</summary>
     public string OverallDiameter { get; set; } = string.Empty;
 
     /// <summary>Wires in hand as typed (empty: 1).</summary>

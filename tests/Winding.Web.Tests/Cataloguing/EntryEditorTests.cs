@@ -108,4 +108,18 @@ public sealed class EntryEditorTests : IDisposable
 
         Assert.False(_provider.Catalogue.MaterialsById.ContainsKey(id!));
     }
+
+    [Fact]
+    public void DimensionTypedInInches_IsSavedInMillimetres_AndShownWithAllItsDigits()
+    {
+        var id = new EntryEditor(_provider, CatalogueEntryKind.Core, "toroid-36x23x15-nizn-125").Clone("inch-core", "Inch core");
+        var editor = new EntryEditor(_provider, CatalogueEntryKind.Core, id!);
+
+        // 1.5 in = 38.1 mm exactly (1 in = 25.4 mm).
+        editor.SetDimension("outerDiameter", "1.5 in");
+        editor.Save();
+
+        Assert.True(editor.Succeeded, editor.Message);
+        Assert.Equal("38.1", new EntryEditor(_provider, CatalogueEntryKind.Core, id!).Dimensions["outerDiameter"]);
+    }
 }

@@ -100,4 +100,33 @@ public sealed class CharacterisationStateTests : IDisposable
         Assert.Null(_state.Result);
         Assert.NotNull(_state.ErrorFor("turns"));
     }
+
+    [Fact]
+    public void CaliperInInches_GivesTheSameResultAsMillimetres()
+    {
+        // 0.5 in = 12.7 mm, 0.25 in = 6.35 mm, 0.125 in = 3.175 mm exactly (1 in = 25.4 mm): the same ring either way.
+        _state.Frequency = "10 kHz";
+        _state.Inductance = "6.93u";
+        (_state.OuterDiameter, _state.InnerDiameter, _state.Length) = ("12.7", "6.35", "3.175");
+        _state.Characterise();
+        var inMillimetres = _state.Result!.FromInductance!.EffectivePermeability;
+
+        (_state.OuterDiameter, _state.InnerDiameter, _state.Length) = ("0.5 in", "0.25\"", "125 mil");
+        _state.Characterise();
+
+        Assert.Equal(inMillimetres, _state.Result!.FromInductance!.EffectivePermeability);
+    }
+
+    [Fact]
+    public void CaliperWithMAlone_IsAnErrorAtThatField()
+    {
+        _state.OuterDiameter = "10m";
+        _state.Frequency = "10 kHz";
+        _state.Inductance = "6.93u";
+
+        _state.Characterise();
+
+        Assert.Contains("ambiguous", _state.ErrorFor("core.dimensionsMm.outerDiameter"), StringComparison.Ordinal);
+        Assert.Null(_state.Result);
+    }
 }

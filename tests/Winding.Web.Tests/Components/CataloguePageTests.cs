@@ -1,3 +1,4 @@
+using Microsoft.Extensions.DependencyInjection;
 using Winding.Web.Components.Pages;
 
 namespace Winding.Web.Tests.Components;
@@ -29,6 +30,23 @@ public sealed class CataloguePageTests : WindingComponentTestBase
         Assert.Contains("471.3 nH", page.Find("[data-testid=value-al]").TextContent, StringComparison.Ordinal);
         Assert.NotNull(page.Find("[data-testid=permeability-chart]"));
         Assert.NotNull(page.Find("button[data-testid=clone]"));
+    }
+
+    [Fact]
+    public async Task CoreDetailPage_Imperial_ShowsDimensionsInInches()
+    {
+        var page = Render<CoreDetailPage>(p => p.Add(x => x.Id, "toroid-10x5x4-nizn-850"));
+        var le = double.Parse(page.Find("[data-testid=value-le]").TextContent.Split(' ')[0], System.Globalization.CultureInfo.InvariantCulture);
+        var al = page.Find("[data-testid=value-al]").TextContent;
+
+        await Services.GetRequiredService<Winding.Web.Display.DisplayUnits>().SetAsync(Winding.Web.Display.UnitSystem.Imperial);
+
+        // The same le converted with 1 in = 25.4 mm (to 0.001 in); AL stays in nH.
+        page.WaitForAssertion(() => Assert.EndsWith(" in", page.Find("[data-testid=value-le]").TextContent.Trim(), StringComparison.Ordinal));
+        var inches = double.Parse(page.Find("[data-testid=value-le]").TextContent.Split(' ')[0], System.Globalization.CultureInfo.InvariantCulture);
+        Assert.Equal(le / 25.4, inches, 0.0005 + (0.005 / 25.4));
+        Assert.EndsWith(" in²", page.Find("[data-testid=value-window]").TextContent.Trim(), StringComparison.Ordinal);
+        Assert.Equal(al, page.Find("[data-testid=value-al]").TextContent);
     }
 
     [Fact]

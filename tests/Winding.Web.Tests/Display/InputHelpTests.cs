@@ -35,4 +35,48 @@ public sealed class InputHelpTests : WindingComponentTestBase
         Assert.Null(InputHelp.For("windings-0-nothing"));
         Assert.Null(InputHelp.For(null));
     }
+
+    [Theory]
+    [InlineData("windings-0-conductor")]
+    [InlineData("windings-1-overall")]
+    [InlineData("windings-0-wrap-thickness")]
+    [InlineData("measure-od")]
+    [InlineData("measure-id")]
+    [InlineData("measure-length")]
+    [InlineData("measure-gap")]
+    [InlineData("edit-outerDiameter")]
+    [InlineData("edit-innerDiameter")]
+    [InlineData("edit-height")]
+    [InlineData("edit-coatingThickness")]
+    [InlineData("edit-length")]
+    [InlineData("edit-residualGap")]
+    [InlineData("edit-holeDiameter")]
+    [InlineData("edit-holeSpacing")]
+    [InlineData("edit-width")]
+    [InlineData("edit-windowBreadth")]
+    [InlineData("edit-windowHeight")]
+    [InlineData("edit-legDiameter")]
+    [InlineData("edit-legWidth")]
+    [InlineData("edit-legDepth")]
+    [InlineData("edit-bobbinWall")]
+    public void LengthField_Help_NamesTheUnitsItTakes(string id)
+    {
+        var help = InputHelp.For(id);
+
+        Assert.NotNull(help);
+        Assert.EndsWith(InputHelp.Units, help, StringComparison.Ordinal);
+        Assert.Contains("mm / inch", help, StringComparison.Ordinal);
+        Assert.Contains("mil", help, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void MeasurePageLengthInputs_HaveTheirDefinitionAsTooltip()
+    {
+        var page = Render<CharacterisePage>();
+
+        foreach (var id in new[] { "measure-od", "measure-id", "measure-length", "measure-gap" })
+        {
+            Assert.Contains(page.FindAll("[title]"), e => e.GetAttribute("title") == InputHelp.For(id));
+        }
+    }
 }

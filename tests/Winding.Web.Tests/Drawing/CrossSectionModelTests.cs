@@ -57,6 +57,22 @@ public sealed class CrossSectionModelTests
     }
 
     [Fact]
+    public void Toroid_Imperial_ScaleBarIsARoundLengthInInches()
+    {
+        var (plan, evaluation) = Evaluate(ToroidCore.Create(Mm(10), Mm(5), Mm(4)), Spec("w", 10, Wire0226));
+
+        var model = CrossSectionModel.For(plan, evaluation, Winding.Web.Display.UnitSystem.Imperial);
+
+        // A quarter of the 10 mm ring is 2.5 mm = 0.098 in: the largest 1, 2 or 5 × 10ⁿ in below it is 0.05 in,
+        // drawn 0.05 × 25.4 = 1.27 mm long (1 in = 25.4 mm exactly). OD 10 mm = 0.394 in, ID 5 mm = 0.197 in.
+        Assert.Equal("0.05 in", model.Scale.Label);
+        Assert.Equal(1.27, model.Scale.LengthMm, Tolerance);
+        Assert.Equal("OD 0.394 in, ID 0.197 in", model.Labels[0].Text);
+        // The geometry stays in millimetres.
+        Assert.Equal(CrossSectionModel.For(plan, evaluation).ViewBox, model.ViewBox);
+    }
+
+    [Fact]
     public void Toroid_ViewBox_SpansTheOuterDiameterToScale()
     {
         var core = ToroidCore.Create(Mm(10), Mm(5), Mm(4)).WithCoating(Mm(0.1));

@@ -194,5 +194,40 @@ public sealed class PlanningStateTests : WindingComponentTestBase
         State.MoveWinding(0, -1);
         Assert.Equal("second", State.Windings[0].Name);
     }
-}
 
+    [Theory]
+    // 20 mil = 0.02 in = 0.508 mm exactly (1 mil = 0.001 in, 1 in = 25.4 mm).
+    [InlineData("0.508")]
+    [InlineData("0.508 mm")]
+    [InlineData("0.02 in")]
+    [InlineData("0.02\"")]
+    [InlineData("20 mil")]
+    public void EditWinding_ConductorWithAnyLengthUnit_IsStoredInMillimetres(string text)
+    {
+        State.EditWinding(0, w => w.ConductorDiameter = text);
+
+        Assert.Null(State.ErrorFor("windings[0].wire.conductorDiameterMm"));
+        Assert.Equal(0.508, State.ToDocument().Windings![0]!.Wire!.ConductorDiameterMm);
+    }
+
+    [Fact]
+    public void EditWinding_ConductorWithMAlone_IsAnAmbiguityError()
+    {
+        State.EditWinding(0, w => w.ConductorDiameter = "0.5m");
+
+        Assert.Contains("ambiguous", State.ErrorFor("windings[0].wire.conductorDiameterMm"), StringComparison.Ordinal);
+        Assert.Null(State.Result);
+    }
+
+    [Fact]
+    public void Load_ConductorWithManyDigits_KeepsEveryDigit()
+    {
+        var document = State.ToDocument();
+        document.Windings![0]!.Wire = new Winding.Catalogue.Plans.PlanWireDocument { ConductorDiameterMm = 0.123456789, OverallDiameterMm = 0.1412345678 };
+
+        State.Load(document);
+
+        Assert.Equal("0.123456789", State.Windings[0].ConductorDiameter);
+        Assert.Equal(0.1412345678, State.ToDocument().Windings![0]!.Wire!.OverallDiameterMm);
+    }
+}

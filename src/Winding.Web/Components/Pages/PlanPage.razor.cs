@@ -15,6 +15,10 @@ public sealed partial class PlanPage
     private object? _comparedFor;
     private IReadOnlyList<(string Name, Winding.Core.Plans.ResponseEvaluation Response)> _chart = [];
 
+    /// <summary>The unit system the results show lengths in (a change re-renders the page).</summary>
+    [CascadingParameter]
+    public Winding.Web.Display.UnitSystem Units { get; set; }
+
     /// <summary>A saved plan's id (<c>/plan/{id}</c>).</summary>
     [Parameter]
     public string? PlanId { get; set; }
