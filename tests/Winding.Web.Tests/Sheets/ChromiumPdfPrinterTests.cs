@@ -80,6 +80,26 @@ public sealed partial class ChromiumPdfPrinterTests : IDisposable
         Assert.Empty(Directory.EnumerateFileSystemEntries(Work()));
     }
 
+    [SkippableFact]
+    public async Task PrintAsync_PageThatNeverFinishes_ChromiumIsKilledAndNothingIsLeft()
+    {
+        var chromium = RequiredTools.Chromium();
+        Skip.IfNot(OperatingSystem.IsLinux(), "The check reads /proc.");
+        using var printer = new ChromiumPdfPrinter(new ChromiumPrinterOptions(chromium, TimeSpan.FromSeconds(3), Work()), NullLogger<ChromiumPdfPrinter>.Instance);
+
+        // A script that never ends keeps the page from ever being printed.
+        var failure = await Assert.ThrowsAsync<PdfPrintFailedException>(() => printer.PrintAsync("<p>x</p><script>for (;;) {}</script>", SheetPaper.A4, CancellationToken.None));
+
+        Assert.Contains("within 3 s", failure.Message, StringComparison.Ordinal);
+        Assert.Empty(Directory.EnumerateFileSystemEntries(Work()));
+        // No Chromium process that ran in the working folder is left (its crash handler leaves on its own once the browser is gone).
+        using var limit = new CancellationTokenSource(TimeSpan.FromSeconds(20));
+        while (ProcessesMentioning(Work()).Count > 0)
+        {
+            await Task.Delay(100, limit.Token);
+        }
+    }
+
     [Fact]
     public async Task PrintAsync_MissingExecutable_ThrowsUnavailableNamingThePath()
     {
@@ -201,6 +221,33 @@ public sealed partial class ChromiumPdfPrinterTests : IDisposable
                 Assert.True(state is null or "Z" or "X", $"Process {pid} is still running (state {state}).");
             }
         }
+    }
+
+    /// <summary>Ids of running processes whose command line mentions <paramref name="text"/>.</summary>
+    private static List<int> ProcessesMentioning(string text)
+    {
+        var found = new List<int>();
+        foreach (var folder in Directory.EnumerateDirectories("/proc"))
+        {
+            if (!int.TryParse(Path.GetFileName(folder), out var pid))
+            {
+                continue;
+            }
+
+            try
+            {
+                if (File.ReadAllText(Path.Combine(folder, "cmdline")).Contains(text, StringComparison.Ordinal))
+                {
+                    found.Add(pid);
+                }
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            {
+                // The process ended while being read, or is not ours to read.
+            }
+        }
+
+        return found;
     }
 
     private static Regex RowPattern(params string[] cells) => new(string.Join(@"\s+", cells.Select(Regex.Escape)));
