@@ -77,7 +77,7 @@ public sealed partial class ChromiumPdfPrinter : ISheetPdfPrinter, IDisposable
         finally
         {
             _slots.Release();
-            DeleteFolder(folder);
+            await DeleteFolderAsync(folder);
         }
     }
 
@@ -201,7 +201,7 @@ public sealed partial class ChromiumPdfPrinter : ISheetPdfPrinter, IDisposable
         }
     }
 
-    private void DeleteFolder(string folder)
+    private async Task DeleteFolderAsync(string folder)
     {
         // Chromium's helper processes may still be closing files in the profile for a moment after the main one exits.
         for (var attempt = 1; ; attempt++)
@@ -223,7 +223,7 @@ public sealed partial class ChromiumPdfPrinter : ISheetPdfPrinter, IDisposable
                     return;
                 }
 
-                Thread.Sleep(100 * attempt);
+                await Task.Delay(100 * attempt, CancellationToken.None);
             }
         }
     }
