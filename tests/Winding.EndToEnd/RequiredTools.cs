@@ -1,7 +1,7 @@
 namespace Winding.EndToEnd;
 
 /// <summary>
-/// External tools the browser tests need. Without a tool the test is reported as skipped with a message that says what
+/// External tools the browser tests and the export cross-checks need. Without a tool the test is reported as skipped with a message that says what
 /// to install; with <c>WINDING_REQUIRE_TOOLS=1</c> (as CI sets it) a missing tool fails the test instead.
 /// </summary>
 public static class RequiredTools
@@ -20,6 +20,12 @@ public static class RequiredTools
         Environment.GetEnvironmentVariable("WINDING_NGSPICE") is { Length: > 0 } custom ? custom : "/usr/bin/ngspice",
         "ngspice",
         "apt-get install ngspice");
+
+    /// <summary>Poppler's pdftotext (Debian package poppler-utils), the independent reader of the printed PDFs' text.</summary>
+    public static string Pdftotext() => Require("/usr/bin/pdftotext", "pdftotext", "apt-get install poppler-utils");
+
+    /// <summary>Poppler's pdfinfo (Debian package poppler-utils), the independent reader of the printed PDFs' page boxes.</summary>
+    public static string Pdfinfo() => Require("/usr/bin/pdfinfo", "pdfinfo", "apt-get install poppler-utils");
 
     private static string Require(string path, string name, string install)
     {

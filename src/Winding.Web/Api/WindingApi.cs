@@ -37,6 +37,14 @@ public static class WindingApi
             .Produces<string>(StatusCodes.Status200OK, "text/plain")
             .ProducesValidationProblem()
             .WithMetadata(new RequestSizeLimitAttribute(MaximumBodyBytes));
+        v1.MapPost("/sweep", SweepAsync)
+            .WithName("Sweep")
+            .WithSummary("A plan's response sweep as CSV")
+            .WithDescription("Takes a plan with operating conditions and returns its response sweep (the sweep /evaluate returns) as RFC 4180 CSV with a header row: frequency (Hz), insertion loss (dB), return loss (dB), |Zin| (ohm), Zin phase (deg), Zin real (ohm), Zin imaginary (ohm), |Vout'| (V) and Vout' phase (deg) (the voltage across the load referred to the primary for a 1 V source), one row per frequency, numbers in the invariant culture, exact to the last digit. The file name comes from the plan's name. format is csv (the default).")
+            .Accepts<PlanDocument>("application/json")
+            .Produces<string>(StatusCodes.Status200OK, "text/csv")
+            .ProducesValidationProblem()
+            .WithMetadata(new RequestSizeLimitAttribute(MaximumBodyBytes));
         v1.MapPost("/wire-choices", WireChoicesAsync)
             .WithName("WireChoices")
             .WithSummary("Rank wire sizes for each winding of a plan")
@@ -99,6 +107,29 @@ public static class WindingApi
 
         var plan = read.Plan with { FrequencyIndependentCore = true };
         return TypedResults.Text(SpiceNetlist.Write(plan, PlanEvaluator.Evaluate(plan)), "text/plain; charset=utf-8");
+    }
+
+    private static async Task<IResult> SweepAsync(HttpRequest request, CatalogueProvider catalogue, [FromQuery] string? format, CancellationToken cancellationToken)
+    {
+        if (format is not null && !string.Equals(format, "csv", StringComparison.OrdinalIgnoreCase))
+        {
+            return ValidationProblem([new FieldError("format", $"Unknown format '{format}': the sweep is given as csv.")]);
+        }
+
+        var read = await ReadPlanAsync(request, catalogue.Catalogue, cancellationToken);
+        if (!read.IsValid)
+        {
+            return ValidationProblem(read.Errors);
+        }
+
+        var plan = read.Plan!;
+        if (plan.Operating is null)
+        {
+            return ValidationProblem([new FieldError("operating", "Required for a sweep: the band sets the frequency range and the source and load resistances.")]);
+        }
+
+        var response = PlanEvaluator.Evaluate(plan).Response!;
+        return TypedResults.File(System.Text.Encoding.UTF8.GetBytes(SweepCsv.Write(response.Sweep)), SweepCsv.ContentType, ExportFileName.For(plan.Name, "csv"));
     }
 
     private static async Task<IResult> WireChoicesAsync(HttpRequest request, CatalogueProvider catalogue, CancellationToken cancellationToken)

@@ -31,7 +31,7 @@ public sealed partial class PlanPage
     [SupplyParameterFromQuery(Name = "demo")]
     public string? DemoQuery { get; set; }
 
-    private string ExportFileName => (string.IsNullOrWhiteSpace(State.PlanName) ? "plan" : string.Concat(State.PlanName.Where(c => char.IsLetterOrDigit(c) || c is ' ' or '-')).Trim().Replace(' ', '-')) + ".json";
+    private string ExportFileName => Winding.Web.Exports.ExportFileName.For(State.PlanName, "json");
 
     private string ExportHref => "data:application/json;charset=utf-8," + Uri.EscapeDataString(System.Text.Json.JsonSerializer.Serialize(State.ToDocument(), Winding.Catalogue.Loading.CatalogueJson.Options));
 
