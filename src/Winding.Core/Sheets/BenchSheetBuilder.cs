@@ -217,8 +217,8 @@ public static class BenchSheetBuilder
     }
 
     private static string DirectionText(WindingPlacement placement, int index) => index == 0
-        ? "reference sense"
+        ? "reference"
         : placement.Kind == PlacementKind.Bifilar
-            ? SheetText.Text($"with winding {placement.OtherWinding + 1}")
-            : "same sense as winding 1";
+            ? SheetText.Text($"with {placement.OtherWinding + 1}")
+            : "same as 1";
 }

@@ -105,7 +105,7 @@ public static class BuildSteps
     {
         var pieces = row.ElementsInHand > 1 ? SheetText.Text($"{row.ElementsInHand} pieces, each ") : string.Empty;
         return SheetText.Text(
-            $"Cut {pieces}{SheetText.WholeMm(row.LengthToCutM)} of {row.WireDescription} for winding {row.Number} ({row.Name}, {row.Turns} turns). That is the wound length with a {plan.Allowance.MarginFraction * 100:0.#} % margin and a {SheetText.Mm(row.LeadLengthPerEndM)} lead at each end.");
+            $"Cut {pieces}{SheetText.CutLength(row.LengthToCutM)} of {row.WireDescription} for winding {row.Number} ({row.Name}, {row.Turns} turns). That is the wound length with a {plan.Allowance.MarginFraction * 100:0.#} % margin and a {SheetText.Mm(row.LeadLengthPerEndM)} lead at each end.");
     }
 
     private static string Wind(TransformerPlan plan, PlanEvaluation evaluation, IReadOnlyList<SheetWindingRow> rows, int i, List<int> partners)

@@ -42,8 +42,17 @@ internal static class SheetText
     /// <summary>A fraction as a percentage, e.g. "25 %".</summary>
     public static string Percent(double fraction) => Text($"{fraction * 100:0.#} %");
 
-    /// <summary>A frequency, e.g. "100 kHz".</summary>
-    public static string Hz(double frequencyHz) => Plans.FrequencyText.Hz(frequencyHz);
+    /// <summary>A frequency to three significant figures, e.g. "100 kHz", "10.2 MHz", "949 Hz".</summary>
+    public static string Hz(double frequencyHz) => frequencyHz switch
+    {
+        >= 999.5e6 => Text($"{frequencyHz / 1e9:G3} GHz"),
+        >= 999.5e3 => Text($"{frequencyHz / 1e6:G3} MHz"),
+        >= 999.5 => Text($"{frequencyHz / 1e3:G3} kHz"),
+        _ => Text($"{frequencyHz:G3} Hz"),
+    };
+
+    /// <summary>A length of wire to cut: whole millimetres up to 2 m, then metres to the centimetre ("14.56 m").</summary>
+    public static string CutLength(double metres) => metres < 2 ? WholeMm(metres) : Text($"{metres:0.00} m");
 
     /// <summary>An interpolated text in the invariant culture.</summary>
     public static string Text(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);

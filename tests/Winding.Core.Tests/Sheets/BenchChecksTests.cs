@@ -161,7 +161,7 @@ public sealed class BenchChecksTests
         Assert.True(check.Lower <= check.Expected * 0.98 && check.Upper >= check.Expected * 1.02);
         Assert.Equal(1, check.WindingIndex);
         Assert.Equal(string.Empty, check.Unit);
-        Assert.Contains("band's geometric centre", check.Condition, StringComparison.Ordinal);
+        Assert.Contains("at 7.35 MHz (the band's geometric centre)", check.Condition, StringComparison.Ordinal);
         Assert.NotNull(plan.Operating);
     }
 
