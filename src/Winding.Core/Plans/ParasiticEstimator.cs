@@ -39,6 +39,9 @@ public static class ParasiticEstimator
     /// <summary>Relative permittivity taken for hook-up wire insulation.</summary>
     public const double HookUpPermittivity = 3.0;
 
+    /// <summary>Accuracy taken for a measured leakage inductance: ±10 % (a repeat measurement; common practice, no source).</summary>
+    public static EstimateAccuracy MeasuredAccuracy { get; } = EstimateAccuracy.PlusMinus(0.1);
+
     /// <summary>Resistivity at or below which a core counts as conductive for turn-to-core capacitance, Ω·m.</summary>
     public const double ConductiveCoreResistivityOhmM = 100;
 
@@ -83,6 +86,7 @@ public static class ParasiticEstimator
 
         double leakageH = 0;
         var leakageMethod = "one winding: no leakage between windings";
+        var leakageAccuracy = EstimateAccuracy.PlusMinus(0);
         double interwindingF = 0;
         var interwindingMethod = "one winding";
         var last = plan.Windings.Count - 1;
@@ -90,12 +94,12 @@ public static class ParasiticEstimator
         {
             if (plan.Measured.LeakageInductanceH is { } measuredL)
             {
-                (leakageH, leakageMethod) = (measuredL, "measured (primary with the last winding shorted)");
+                (leakageH, leakageMethod, leakageAccuracy) = (measuredL, "measured (primary with the last winding shorted; a repeat measurement within about ±10 %)", MeasuredAccuracy);
                 measured.Add("leakageInductance");
             }
             else
             {
-                (leakageH, leakageMethod) = Leakage(plan, fits, shape, last);
+                (leakageH, leakageMethod, leakageAccuracy) = Leakage(plan, fits, shape, last);
             }
 
             if (plan.Measured.InterwindingCapacitanceF is { } measuredC)
@@ -117,7 +121,10 @@ public static class ParasiticEstimator
             transformerSrf = 1 / (2 * Math.PI * Math.Sqrt(al.InductanceH(plan.Windings[0].Turns) * shuntF));
         }
 
-        return new ParasiticsEvaluation(leakageH, leakageMethod, interwindingF, interwindingMethod, selfCaps, selfMethods, resonances, transformerSrf, measured);
+        return new ParasiticsEvaluation(leakageH, leakageMethod, interwindingF, interwindingMethod, selfCaps, selfMethods, resonances, transformerSrf, measured)
+        {
+            LeakageAccuracy = leakageAccuracy,
+        };
     }
 
     private static (double, string) SelfCapacitance(WindingSpec spec, WindingFit fit, CoreShape shape, bool conductive, double arcDegrees)
@@ -148,7 +155,7 @@ public static class ParasiticEstimator
             Text($"{fit.Layers} layers: energy method, (4/3)·C_l·(n − 1)/n² with C_l the layer-to-layer plate capacitance (±30 %)"));
     }
 
-    private static (double, string) Leakage(TransformerPlan plan, IReadOnlyList<WindingFit> fits, CoreShape shape, int last)
+    private static (double, string, EstimateAccuracy) Leakage(TransformerPlan plan, IReadOnlyList<WindingFit> fits, CoreShape shape, int last)
     {
         var first = plan.Windings[0];
         var second = plan.Windings[last];
@@ -159,7 +166,7 @@ public static class ParasiticEstimator
             var spacingM = Math.Max(first.Wire.ElementOverallDiameter.Metres, second.Wire.ElementOverallDiameter.Metres);
             var conductorM = Math.Min(EquivalentConductorDiameterM(first.Wire), EquivalentConductorDiameterM(second.Wire));
             var perMetre = LeakageInductance.TwoWireLinePerMetreHPerM(Math.Max(spacingM, conductorM), conductorM);
-            return (perMetre * first.Turns * f1.MeanTurnLengthM, "bifilar pair: two-wire line inductance times the pair's length (±30 %)");
+            return (perMetre * first.Turns * f1.MeanTurnLengthM, "bifilar pair: two-wire line inductance times the pair's length (±30 %)", EstimateAccuracy.PlusMinus(0.3));
         }
 
         var overlap = OverlapFraction(plan, 0, last);
@@ -171,7 +178,8 @@ public static class ParasiticEstimator
             var arc1 = meanCircumferenceM * PlacementRegion.ArcDegrees(plan.Windings, 0) / 360;
             var arc2 = meanCircumferenceM * PlacementRegion.ArcDegrees(plan.Windings, last) / 360;
             return (LeakageInductance.SectoredEstimateH(first.Turns, a1, arc1, second.Turns, a2, arc2),
-                "side-by-side sectors: air-cored inductance of each sector (a derived estimate, within a factor of about 3; measure it)");
+                "side-by-side sectors: air-cored inductance of each sector (a derived estimate, within a factor of about 3; measure it)",
+                EstimateAccuracy.WithinFactor(3));
         }
 
         var gapM = Math.Max(0, f2.BuildBelowM - (f1.BuildBelowM + f1.BuildThicknessM));
@@ -180,10 +188,13 @@ public static class ParasiticEstimator
         // A winding that found no room at all still has at least one wire's build for this estimate.
         var build1 = Math.Max(f1.BuildThicknessM, first.Wire.ElementOverallDiameter.Metres);
         var build2 = Math.Max(f2.BuildThicknessM, second.Wire.ElementOverallDiameter.Metres);
-        return (LeakageInductance.OverlaidLayersH(first.Turns, mltM, breadthM, build1, build2, gapM),
-            shape is BobbinCore
-                ? "overlaid layers: 1-D MMF formula μ0·N²·MLT·(c + Σa/3)/b_w (McLyman; ±30 %)"
-                : "overlaid layers: 1-D MMF formula μ0·N²·MLT·(c + Σa/3)/b_w with b_w the mean circumference of the winding region (an estimate on this shape; measure it)");
+        return shape is BobbinCore
+            ? (LeakageInductance.OverlaidLayersH(first.Turns, mltM, breadthM, build1, build2, gapM),
+                "overlaid layers: 1-D MMF formula μ0·N²·MLT·(c + Σa/3)/b_w (McLyman; ±30 %)",
+                EstimateAccuracy.PlusMinus(0.3))
+            : (LeakageInductance.OverlaidLayersH(first.Turns, mltM, breadthM, build1, build2, gapM),
+                "overlaid layers: 1-D MMF formula μ0·N²·MLT·(c + Σa/3)/b_w with b_w the mean circumference of the winding region (a rougher estimate on this shape, taken as within a factor of 2, no source; measure it)",
+                EstimateAccuracy.WithinFactor(2));
     }
 
     private static (double, string) Interwinding(TransformerPlan plan, IReadOnlyList<WindingFit> fits, CoreShape shape, int last)

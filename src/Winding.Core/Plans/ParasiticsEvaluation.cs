@@ -20,4 +20,12 @@ public sealed record ParasiticsEvaluation(
     IReadOnlyList<string> SelfCapacitanceMethods,
     IReadOnlyList<double?> SelfResonancesHz,
     double? TransformerSelfResonanceHz,
-    IReadOnlyList<string> Measured);
+    IReadOnlyList<string> Measured)
+{
+    /// <summary>
+    /// The accuracy <see cref="LeakageMethod"/> states, as factors (±30 % for the 1-D formula on a bobbin, a bifilar
+    /// pair or a measured value's ±10 %; a factor of 3 for side-by-side sectors; a factor of 2 for overlaid windings on
+    /// other shapes). A bench sheet sets its leakage limits from it.
+    /// </summary>
+    public EstimateAccuracy LeakageAccuracy { get; init; } = EstimateAccuracy.WithinFactor(3);
+}

@@ -8,6 +8,7 @@ using Winding.Core.Windings;
 using Winding.Core.Wire;
 using Winding.Web.Exports;
 using Winding.Web.Hosting;
+using Winding.Web.Sheets;
 
 namespace Winding.Web.Api;
 
@@ -52,6 +53,15 @@ public static class WindingApi
             .Accepts<PlanDocument>("application/json")
             .Produces<WireChoicesResponse>(StatusCodes.Status200OK, "application/json")
             .ProducesValidationProblem()
+            .WithMetadata(new RequestSizeLimitAttribute(MaximumBodyBytes));
+        v1.MapPost("/sheet", SheetAsync)
+            .WithName("Sheet")
+            .WithSummary("The bench sheet of a plan, as HTML or PDF")
+            .WithDescription("Takes a plan (the same document as /evaluate, validated the same way) and returns its bench sheet: the core, the windings table in winding order with lengths to cut, a to-scale cross-section, numbered build steps, the bench checks with expected values, limits and empty measured boxes, and safety cautions. Query format=html (default) answers one standalone text/html document with its styles inlined; format=pdf answers application/pdf printed by headless Chromium, or 503 with the reason when it is missing or fails. Query paper=a4 (default) or letter sets the page size. Every name in the plan is escaped. Invalid input answers 400 with application/problem+json whose errors name each bad field.")
+            .Accepts<PlanDocument>("application/json")
+            .Produces<string>(StatusCodes.Status200OK, "text/html", "application/pdf")
+            .ProducesValidationProblem()
+            .ProducesProblem(StatusCodes.Status503ServiceUnavailable)
             .WithMetadata(new RequestSizeLimitAttribute(MaximumBodyBytes));
         v1.MapGet("/wires", ListWires)
             .WithName("ListWires")
@@ -184,12 +194,70 @@ public static class WindingApi
         return TypedResults.Json(new WireChoicesResponse(windings), ApiJson.Options);
     }
 
+    private static async Task<IResult> SheetAsync(HttpRequest request, CatalogueProvider catalogue, TimeProvider time, SheetHtmlRenderer renderer, IServiceProvider services, string? format, string? paper, CancellationToken cancellationToken)
+    {
+        var errors = new List<FieldError>();
+        var pdf = false;
+        switch (format?.Trim().ToUpperInvariant())
+        {
+            case null or "" or "HTML":
+                break;
+            case "PDF":
+                pdf = true;
+                break;
+            default:
+                errors.Add(new FieldError("format", $"Unknown format '{format}': use html or pdf."));
+                break;
+        }
+
+        if (!SheetPapers.TryParse(paper, out var sheetPaper))
+        {
+            errors.Add(new FieldError("paper", $"Unknown paper '{paper}': use a4 or letter."));
+        }
+
+        var (document, read) = await ReadDocumentAsync(request, catalogue.Catalogue, cancellationToken);
+        if (errors.Count > 0 || !read.IsValid)
+        {
+            return ValidationProblem([.. errors, .. read.Errors]);
+        }
+
+        var plan = read.Plan!;
+        var view = SheetViewBuilder.Build(plan, PlanEvaluator.Evaluate(plan), SheetViewBuilder.CoreName(document!, catalogue.Catalogue), SheetViewBuilder.Today(time), 0, "sent to the API, not saved");
+        var html = await renderer.RenderAsync(view, sheetPaper);
+        if (!pdf)
+        {
+            return TypedResults.Text(html, "text/html; charset=utf-8");
+        }
+
+        if (services.GetService<ISheetPdfPrinter>() is not { } printer)
+        {
+            return TypedResults.Problem(
+                statusCode: StatusCodes.Status503ServiceUnavailable,
+                title: "PDF printing is not available",
+                detail: "This server has no PDF printer set up. Ask for format=html and print the page from a browser.");
+        }
+
+        try
+        {
+            var bytes = await printer.PrintAsync(html, sheetPaper, cancellationToken);
+            return TypedResults.File(bytes, "application/pdf", "bench-sheet.pdf");
+        }
+        catch (SheetPrintException e)
+        {
+            return TypedResults.Problem(statusCode: StatusCodes.Status503ServiceUnavailable, title: "The PDF printer could not print the sheet", detail: e.Message);
+        }
+    }
+
     /// <summary>Reads and validates a plan from a JSON request body; a JSON error becomes a field error at its path.</summary>
-    private static async Task<PlanReadResult> ReadPlanAsync(HttpRequest request, CoreCatalogue catalogue, CancellationToken cancellationToken)
+    private static async Task<PlanReadResult> ReadPlanAsync(HttpRequest request, CoreCatalogue catalogue, CancellationToken cancellationToken) =>
+        (await ReadDocumentAsync(request, catalogue, cancellationToken)).Read;
+
+    /// <summary>Reads the plan document from a JSON request body and validates it.</summary>
+    private static async Task<(PlanDocument? Document, PlanReadResult Read)> ReadDocumentAsync(HttpRequest request, CoreCatalogue catalogue, CancellationToken cancellationToken)
     {
         if (request.ContentType is { } type && !type.Contains("json", StringComparison.OrdinalIgnoreCase))
         {
-            return new PlanReadResult(null, [new FieldError(string.Empty, "The request body must be JSON (Content-Type: application/json).")]);
+            return (null, new PlanReadResult(null, [new FieldError(string.Empty, "The request body must be JSON (Content-Type: application/json).")]));
         }
 
         PlanDocument? document;
@@ -199,10 +267,10 @@ public static class WindingApi
         }
         catch (JsonException e)
         {
-            return new PlanReadResult(null, [new FieldError(JsonErrorText.FieldOf(e), JsonErrorText.ReasonOf(e))]);
+            return (null, new PlanReadResult(null, [new FieldError(JsonErrorText.FieldOf(e), JsonErrorText.ReasonOf(e))]));
         }
 
-        return PlanReader.Read(document, catalogue);
+        return (document, PlanReader.Read(document, catalogue));
     }
 
     private static Microsoft.AspNetCore.Http.HttpResults.ValidationProblem ValidationProblem(IReadOnlyList<FieldError> errors)

@@ -4,5 +4,5 @@ namespace Winding.Web.Drawing;
 /// <param name="Kind">Start, tap or finish.</param>
 /// <param name="TurnsFromStart">Turns between the start and this lead (0 at the start, N at the finish).</param>
 /// <param name="Line">The lead, from the coil outwards; the terminal is at its end.</param>
-/// <param name="Label">The label beside the terminal: "S1", "F1", or for a tap "T1.1 (10 turns)".</param>
+/// <param name="Label">The label beside the terminal: "1S", "1F", or for a tap "1T1 (10 turns)" (the marks of the bench sheet).</param>
 public sealed record SchematicLead(SchematicLeadKind Kind, int TurnsFromStart, SchematicLine Line, SchematicText Label);

@@ -16,8 +16,8 @@ namespace Winding.Web.Drawing;
 /// at least one each, so a tap always sits between two loops;</item>
 /// <item>every winding is taken as wound in the same sense from its start: the start is the coil's top end and carries the
 /// phasing dot, the finish is the bottom end;</item>
-/// <item>leads run out horizontally from the coil to a terminal, labelled "S1" (start of winding 1), "F1" (finish),
-/// and for taps "T1.1 (10 turns)" (winding 1's first tap from the start, with its turns from the start);</item>
+/// <item>leads run out horizontally from the coil to a terminal, labelled "1S" (start of winding 1), "1F" (finish),
+/// and for taps "1T1 (10 turns)" (winding 1's first tap from the start, with its turns from the start);</item>
 /// <item>the winding's name and "N turns" stand above its coil.</item>
 /// </list>
 /// Nothing is told by colour alone: everything is black on white, and each mark has its text.
@@ -148,16 +148,16 @@ public sealed record SchematicModel(double MinX, double MinY, double Width, doub
         }
 
         var number = (index + 1).ToString(CultureInfo.InvariantCulture);
-        var leads = new List<SchematicLead> { Lead(SchematicLeadKind.Start, 0, side, top, "S" + number) };
+        var leads = new List<SchematicLead> { Lead(SchematicLeadKind.Start, 0, side, top, number + "S") };
         var loopsSoFar = 0;
         for (var t = 0; t < winding.Taps.Count; t++)
         {
             loopsSoFar += sections[t];
             var turns = winding.Taps[t];
-            leads.Add(Lead(SchematicLeadKind.Tap, turns, side, top + (loopsSoFar * LoopHeight), FormattableString.Invariant($"T{number}.{t + 1} ({turns} {TurnsWord(turns)})")));
+            leads.Add(Lead(SchematicLeadKind.Tap, turns, side, top + (loopsSoFar * LoopHeight), FormattableString.Invariant($"{number}T{t + 1} ({turns} {TurnsWord(turns)})")));
         }
 
-        leads.Add(Lead(SchematicLeadKind.Finish, winding.Turns, side, bottom, "F" + number));
+        leads.Add(Lead(SchematicLeadKind.Finish, winding.Turns, side, bottom, number + "F"));
         var headerX = side * (CoilX - radius);
         return new SchematicCoil(
             index,

@@ -40,6 +40,8 @@ public static class WindingHostingExtensions
         services.AddSingleton<CatalogueProvider>();
         services.AddSingleton(sp => new Winding.Catalogue.Plans.PlanStore(sp.GetRequiredService<WindingPaths>().DataDirectory, sp.GetRequiredService<TimeProvider>()));
         services.AddSingleton(TimeProvider.System);
+        // ISheetPdfPrinter is not registered here: without one, POST /api/v1/sheet?format=pdf answers 503.
+        services.AddSingleton<Sheets.SheetHtmlRenderer>();
         return services.AddWindingViewModels();
     }
 
@@ -55,6 +57,7 @@ public static class WindingHostingExtensions
         services.AddScoped<Characterising.CharacterisationState>();
         services.AddScoped<Display.DisplayUnits>();
         services.AddCascadingValue(sp => sp.GetRequiredService<Display.DisplayUnits>().Source);
+        services.AddScoped<Sheets.SheetLoader>();
         return services;
     }
 

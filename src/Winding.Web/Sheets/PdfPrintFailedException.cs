@@ -4,7 +4,7 @@ namespace Winding.Web.Sheets;
 /// Chromium was started but gave no PDF: it ran past the timeout (and was killed), exited with an error, or exited
 /// without writing the file. The message says which, with Chromium's last line of output.
 /// </summary>
-public sealed class PdfPrintFailedException : Exception
+public sealed class PdfPrintFailedException : SheetPrintException
 {
     /// <summary>Creates the failure.</summary>
     public PdfPrintFailedException(string message)

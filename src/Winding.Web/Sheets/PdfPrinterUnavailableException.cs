@@ -4,7 +4,7 @@ namespace Winding.Web.Sheets;
 /// PDF printing cannot run on this host: the Chromium executable is missing or cannot be started. The API answers
 /// <c>503 Service Unavailable</c> with the message, which names the path that was tried.
 /// </summary>
-public sealed class PdfPrinterUnavailableException : Exception
+public sealed class PdfPrinterUnavailableException : SheetPrintException
 {
     /// <summary>Creates the failure for a Chromium executable that was not found at <paramref name="executablePath"/>.</summary>
     public PdfPrinterUnavailableException(string executablePath)

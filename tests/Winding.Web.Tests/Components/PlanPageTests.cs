@@ -27,6 +27,14 @@ public sealed class PlanPageTests : WindingComponentTestBase
     }
 
     [Fact]
+    public void PlanPage_BenchSheetButton_LeadsToTheSheetOfThePlanOnTheForm()
+    {
+        var page = Render<PlanPage>();
+
+        Assert.Equal("sheet", page.Find("[data-testid=bench-sheet-link]").GetAttribute("href"));
+    }
+
+    [Fact]
     public void PlanPage_TypingTurns_UpdatesTheInductance()
     {
         var page = Render<PlanPage>();

@@ -26,9 +26,9 @@ public sealed partial class SchematicDrawingTests : WindingComponentTestBase
 
         var taps = cut.FindAll("[data-lead=tap]");
         Assert.Equal(3, taps.Count);
-        Assert.Equal(["T1.1 (3 turns)", "T1.2 (6 turns)", "T2.1 (10 turns)"], taps.Select(t => t.QuerySelector("text")!.TextContent));
+        Assert.Equal(["1T1 (3 turns)", "1T2 (6 turns)", "2T1 (10 turns)"], taps.Select(t => t.QuerySelector("text")!.TextContent));
         Assert.Equal(["3", "6", "10"], taps.Select(t => t.GetAttribute("data-turns")));
-        Assert.Equal(["S1", "F1", "S2", "F2"], cut.FindAll("[data-lead=start] text, [data-lead=finish] text").Select(t => t.TextContent));
+        Assert.Equal(["1S", "1F", "2S", "2F"], cut.FindAll("[data-lead=start] text, [data-lead=finish] text").Select(t => t.TextContent));
     }
 
     [Fact]

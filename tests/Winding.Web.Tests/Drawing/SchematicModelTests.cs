@@ -47,7 +47,7 @@ public sealed class SchematicModelTests
         Assert.Equal([0, 3, 6, 9], leads.Select(l => l.TurnsFromStart));
         // With one loop per turn, the tap at turn 3 sits three loops below the start.
         Assert.Equal(leads[0].Line.Y1 + (3 * SchematicModel.LoopHeight), leads[1].Line.Y1, 9);
-        Assert.Equal(["S1", "T1.1 (3 turns)", "T1.2 (6 turns)", "F1"], leads.Select(l => l.Label.Text));
+        Assert.Equal(["1S", "1T1 (3 turns)", "1T2 (6 turns)", "1F"], leads.Select(l => l.Label.Text));
     }
 
     [Fact]
