@@ -11,7 +11,8 @@ namespace Winding.Benchmarks;
 /// data folder) and Debian's Chromium. One benchmark invocation types a new primary turn count into the plan page of the
 /// end-fed demo (401-point response) and commits it (the field's change event, as Enter or leaving the field does, so
 /// the typing debounce is not part of the figure), then waits in the browser until the results panel shows the new
-/// evaluation and the response chart has been drawn again, and one more animation frame (the paint).
+/// evaluation and the response chart has been drawn again (Plotly's
+/// plotly_afterplot event on the existing figure, or a new figure), and one more animation frame (the paint).
 /// Runs in process (Playwright's driver sits beside this assembly). Needs /usr/bin/chromium (or WINDING_CHROMIUM).
 /// </summary>
 [InProcess]
@@ -27,6 +28,8 @@ public class BrowserEditToRedrawBenchmarks : IDisposable
           const chart = () => document.querySelector('[data-testid=response-chart] .js-plotly-plot');
           const before = results.dataset.evaluation;
           const oldPlot = chart();
+          let redrawn = false;
+          if (oldPlot && oldPlot.once) { oldPlot.once('plotly_afterplot', () => { redrawn = true; }); }
           const t0 = performance.now();
           const shown = new Promise(resolve => {
             const observer = new MutationObserver(() => {
@@ -44,7 +47,7 @@ public class BrowserEditToRedrawBenchmarks : IDisposable
           const deadline = performance.now() + 5000;
           while (true) {
             const plot = chart();
-            if (plot && plot !== oldPlot && plot._fullLayout) break;
+            if (redrawn || (plot && plot !== oldPlot && plot._fullLayout)) break;
             if (performance.now() > deadline) throw new Error('the chart was not redrawn');
             await new Promise(r => requestAnimationFrame(r));
           }
