@@ -70,6 +70,40 @@ public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
         await Assertions.Expect(label).ToContainTextAsync("Conductor (in)");
     }
 
+    [SkippableFact]
+    public async Task KeyboardOnly_ReachTheTurns_ChangeThem_AndSave()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/plan?demo=club-long-wire-receive"));
+        await Assertions.Expect(page.Locator("#windings-0-turns")).ToHaveValueAsync("12");
+
+        // From the plan's name, Tab walks the form in reading order and reaches the first winding's turns.
+        await page.Locator("#plan-name").FocusAsync();
+        var steps = 0;
+        while (await page.EvaluateAsync<string>("() => document.activeElement?.id ?? ''") != "windings-0-turns")
+        {
+            Assert.True(++steps < 60, "Tab never reached the first winding's turns");
+            await page.Keyboard.PressAsync("Tab");
+        }
+
+        await page.Keyboard.PressAsync("Control+A");
+        await page.Keyboard.TypeAsync("20");
+        await page.Keyboard.PressAsync("Tab");
+        await Assertions.Expect(page.Locator("[data-testid=value-w0-turns-per-layer]")).ToContainTextAsync("20");
+        await page.Keyboard.PressAsync("Shift+Tab");
+        Assert.Equal("windings-0-turns", await page.EvaluateAsync<string>("() => document.activeElement?.id ?? ''"));
+
+        // The name, then the save button right after it, pressed with Enter.
+        await page.Locator("#plan-name").FocusAsync();
+        await page.Keyboard.PressAsync("Control+A");
+        await page.Keyboard.TypeAsync("Receive transformer, keyboard");
+        await page.Keyboard.PressAsync("Tab");
+        Assert.Equal("save-plan", await page.EvaluateAsync<string>("() => document.activeElement?.dataset.testid ?? ''"));
+        await page.Keyboard.PressAsync("Enter");
+        await Assertions.Expect(page.GetByTestId("save-message")).ToContainTextAsync("Saved");
+        await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "plan-keyboard.png"), FullPage = true });
+    }
+
     /// <summary>What the API answers for the same plan, formatted as the page formats it.</summary>
     private async Task<string> ExpectedInductance(int turns)
     {
