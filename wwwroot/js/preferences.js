@@ -1,4 +1,4 @@
-// Per-browser preferences of Winding (the unit system), kept in localStorage. Without storage (private windows,
+// Per-browser preferences of Winding (unit system, colours), kept in localStorage. Without storage (private windows,
 // storage switched off) reads give null and writes are dropped: the choice then lasts for the visit only.
 export function read(key) {
     try {

@@ -1,30 +1,25 @@
 using Microsoft.AspNetCore.Components;
-using Microsoft.JSInterop;
 
 namespace Winding.Web.Display;
 
 /// <summary>
 /// The unit system of one browser tab (scoped: one per circuit). Components receive it as a cascading
 /// <see cref="UnitSystem"/> (registered by <c>AddWindingViewModels</c> from <see cref="Source"/>), so a change re-renders
-/// every component that shows lengths. The choice is kept per browser in localStorage through the small module
-/// <c>wwwroot/js/preferences.js</c>; without it (prerendering, storage off) metric stays.
+/// every component that shows lengths. The choice is kept per browser (<see cref="BrowserPreferences"/>); without
+/// storage (prerendering, storage off) metric stays.
 /// </summary>
-public sealed class DisplayUnits : IAsyncDisposable
+public sealed class DisplayUnits
 {
     /// <summary>The localStorage key.</summary>
     public const string StorageKey = "winding.units";
 
-    /// <summary>The module path, relative to the app's base address.</summary>
-    public const string ModulePath = "./js/preferences.js";
-
-    private readonly IJSRuntime _js;
-    private IJSObjectReference? _module;
+    private readonly BrowserPreferences _preferences;
 
     /// <summary>Creates the service for one circuit.</summary>
-    public DisplayUnits(IJSRuntime js)
+    public DisplayUnits(BrowserPreferences preferences)
     {
-        ArgumentNullException.ThrowIfNull(js);
-        _js = js;
+        ArgumentNullException.ThrowIfNull(preferences);
+        _preferences = preferences;
     }
 
     /// <summary>The current system.</summary>
@@ -47,18 +42,9 @@ public sealed class DisplayUnits : IAsyncDisposable
     /// <summary>Reads the browser's stored choice and applies it (once the circuit is interactive).</summary>
     public async Task LoadAsync()
     {
-        try
+        if (Parse(await _preferences.ReadAsync(StorageKey)) is { } system && system != System)
         {
-            _module ??= await _js.InvokeAsync<IJSObjectReference>("import", ModulePath);
-            var stored = Parse(await _module.InvokeAsync<string?>("read", StorageKey));
-            if (stored is { } system && system != System)
-            {
-                await ApplyAsync(system);
-            }
-        }
-        catch (Exception e) when (e is JSException or JSDisconnectedException or InvalidOperationException or TaskCanceledException)
-        {
-            // No storage to read (prerendering, a closed tab, storage off): the current system stays.
+            await ApplyAsync(system);
         }
     }
 
@@ -70,35 +56,11 @@ public sealed class DisplayUnits : IAsyncDisposable
             await ApplyAsync(system);
         }
 
-        try
-        {
-            _module ??= await _js.InvokeAsync<IJSObjectReference>("import", ModulePath);
-            await _module.InvokeVoidAsync("write", StorageKey, Word(system));
-        }
-        catch (Exception e) when (e is JSException or JSDisconnectedException or InvalidOperationException or TaskCanceledException)
-        {
-            // Not stored: the choice lasts for this visit.
-        }
+        await _preferences.WriteAsync(StorageKey, Word(system));
     }
 
     /// <summary>Switches between metric and imperial.</summary>
     public Task ToggleAsync() => SetAsync(System == UnitSystem.Imperial ? UnitSystem.Metric : UnitSystem.Imperial);
-
-    /// <inheritdoc />
-    public async ValueTask DisposeAsync()
-    {
-        if (_module is not null)
-        {
-            try
-            {
-                await _module.DisposeAsync();
-            }
-            catch (JSDisconnectedException)
-            {
-                // The circuit is gone; so is the module.
-            }
-        }
-    }
 
     private Task ApplyAsync(UnitSystem system)
     {

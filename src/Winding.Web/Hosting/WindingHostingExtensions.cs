@@ -55,6 +55,7 @@ public static class WindingHostingExtensions
         services.AddScoped<PlanningState>();
         services.AddTransient<SavedPlansModel>();
         services.AddScoped<Characterising.CharacterisationState>();
+        services.AddScoped<Display.BrowserPreferences>();
         services.AddScoped<Display.DisplayUnits>();
         services.AddCascadingValue(sp => sp.GetRequiredService<Display.DisplayUnits>().Source);
         services.AddScoped<Sheets.SheetLoader>();

@@ -21,6 +21,22 @@ public sealed class MainLayoutTests : WindingComponentTestBase
         layout.WaitForAssertion(() => Assert.Equal("false", layout.Find("button[data-testid=dark-mode]").GetAttribute("aria-pressed")));
     }
 
+    [Fact]
+    public void DarkModeButton_StoresTheChoice_AndAStoredChoiceWinsOverTheSystems()
+    {
+        JSInterop.Setup<bool>("mudThemeProvider.getSystemDarkMode").SetResult(false);
+        var module = JSInterop.SetupModule(BrowserPreferences.ModulePath);
+        module.Setup<string?>("read", MainLayout.ColoursKey).SetResult("dark");
+        module.SetupVoid("write", _ => true).SetVoidResult();
+
+        var layout = Render<MainLayout>(p => p.Add(l => l.Body, (RenderFragment)(b => b.AddContent(0, "content"))));
+
+        layout.WaitForAssertion(() => Assert.Equal("true", layout.Find("button[data-testid=dark-mode]").GetAttribute("aria-pressed")));
+        layout.Find("button[data-testid=dark-mode]").Click();
+        layout.WaitForAssertion(() => Assert.Equal("false", layout.Find("button[data-testid=dark-mode]").GetAttribute("aria-pressed")));
+        Assert.Equal([MainLayout.ColoursKey, "light"], module.VerifyInvoke("write").Arguments);
+    }
+
     private static RenderFragment Page<TPage>()
         where TPage : IComponent => b =>
     {
@@ -31,7 +47,7 @@ public sealed class MainLayoutTests : WindingComponentTestBase
     [Fact]
     public void UnitSwitch_Click_SwitchesToInchesAndStoresTheChoice()
     {
-        var module = JSInterop.SetupModule(DisplayUnits.ModulePath);
+        var module = JSInterop.SetupModule(BrowserPreferences.ModulePath);
         module.SetupVoid("write", _ => true).SetVoidResult();
         var layout = Render<MainLayout>(p => p.Add(l => l.Body, Page<PlanPage>()));
         Assert.Equal("false", layout.Find("button[data-testid=unit-system]").GetAttribute("aria-pressed"));
@@ -46,7 +62,7 @@ public sealed class MainLayoutTests : WindingComponentTestBase
     [Fact]
     public void UnitSwitch_StoredChoice_IsRestoredWhenTheAppOpens()
     {
-        var module = JSInterop.SetupModule(DisplayUnits.ModulePath);
+        var module = JSInterop.SetupModule(BrowserPreferences.ModulePath);
         module.Setup<string?>("read", DisplayUnits.StorageKey).SetResult("imperial");
 
         var layout = Render<MainLayout>(p => p.Add(l => l.Body, Page<PlanPage>()));
@@ -58,7 +74,7 @@ public sealed class MainLayoutTests : WindingComponentTestBase
     [Fact]
     public async Task UnitSwitch_Choice_SurvivesNavigationToAnotherPage()
     {
-        JSInterop.SetupModule(DisplayUnits.ModulePath).SetupVoid("write", _ => true).SetVoidResult();
+        JSInterop.SetupModule(BrowserPreferences.ModulePath).SetupVoid("write", _ => true).SetVoidResult();
         var plan = Render<MainLayout>(p => p.Add(l => l.Body, Page<PlanPage>()));
         plan.Find("button[data-testid=unit-system]").Click();
         plan.WaitForAssertion(() => Assert.Equal("true", plan.Find("button[data-testid=unit-system]").GetAttribute("aria-pressed")));

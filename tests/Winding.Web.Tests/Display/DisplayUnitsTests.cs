@@ -11,7 +11,7 @@ public sealed class DisplayUnitsTests : WindingComponentTestBase
     [Fact]
     public async Task LoadAsync_StoredImperial_SwitchesToImperial()
     {
-        var module = JSInterop.SetupModule(DisplayUnits.ModulePath);
+        var module = JSInterop.SetupModule(BrowserPreferences.ModulePath);
         module.Setup<string?>("read", DisplayUnits.StorageKey).SetResult("imperial");
 
         await Units.LoadAsync();
@@ -24,7 +24,7 @@ public sealed class DisplayUnitsTests : WindingComponentTestBase
     [InlineData("furlongs")]
     public async Task LoadAsync_NothingUsableStored_StaysMetric(string? stored)
     {
-        var module = JSInterop.SetupModule(DisplayUnits.ModulePath);
+        var module = JSInterop.SetupModule(BrowserPreferences.ModulePath);
         module.Setup<string?>("read", DisplayUnits.StorageKey).SetResult(stored);
 
         await Units.LoadAsync();
@@ -35,7 +35,7 @@ public sealed class DisplayUnitsTests : WindingComponentTestBase
     [Fact]
     public async Task LoadAsync_StorageFails_StaysMetric()
     {
-        var module = JSInterop.SetupModule(DisplayUnits.ModulePath);
+        var module = JSInterop.SetupModule(BrowserPreferences.ModulePath);
         module.Setup<string?>("read", DisplayUnits.StorageKey).SetException(new Microsoft.JSInterop.JSException("storage is off"));
 
         await Units.LoadAsync();
@@ -46,7 +46,7 @@ public sealed class DisplayUnitsTests : WindingComponentTestBase
     [Fact]
     public async Task ToggleAsync_SwitchesAndWritesTheChoice()
     {
-        var module = JSInterop.SetupModule(DisplayUnits.ModulePath);
+        var module = JSInterop.SetupModule(BrowserPreferences.ModulePath);
         module.SetupVoid("write", _ => true).SetVoidResult();
 
         await Units.ToggleAsync();
