@@ -6,6 +6,7 @@ using AngleSharp.Dom;
 using AngleSharp.Html.Parser;
 using Microsoft.AspNetCore.TestHost;
 using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.DependencyInjection.Extensions;
 using Winding.Catalogue.Loading;
 using Winding.Catalogue.Plans;
 using Winding.Core.Plans;
@@ -159,10 +160,28 @@ public sealed class SheetApiTests : IClassFixture<TempDataFactory>
     [Fact]
     public async Task Sheet_PdfWithoutAPrinter_Is503WithAClearMessage()
     {
-        using var response = await Post(Demo("club-long-wire-receive"), "?format=pdf");
+        using var factory = _factory.WithWebHostBuilder(b => b.ConfigureTestServices(s => s.RemoveAll<ISheetPdfPrinter>()));
+        using var client = factory.CreateClient();
+        using var content = new StringContent(Demo("club-long-wire-receive"), Encoding.UTF8, "application/json");
+
+        using var response = await client.PostAsync(new Uri("/api/v1/sheet?format=pdf", UriKind.Relative), content);
 
         Assert.Equal(HttpStatusCode.ServiceUnavailable, response.StatusCode);
         Assert.Contains("no PDF printer", await response.Content.ReadAsStringAsync(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task Sheet_PdfWithChromiumMissing_Is503NamingThePathTried()
+    {
+        var missing = Path.Combine(Path.GetTempPath(), "winding-no-such-chromium", "chromium");
+        using var factory = _factory.WithWebHostBuilder(b => b.UseSetting("Winding:ChromiumPath", missing));
+        using var client = factory.CreateClient();
+        using var content = new StringContent(Demo("club-long-wire-receive"), Encoding.UTF8, "application/json");
+
+        using var response = await client.PostAsync(new Uri("/api/v1/sheet?format=pdf", UriKind.Relative), content);
+
+        Assert.Equal(HttpStatusCode.ServiceUnavailable, response.StatusCode);
+        Assert.Contains(missing, await response.Content.ReadAsStringAsync(), StringComparison.Ordinal);
     }
 
     [Fact]
