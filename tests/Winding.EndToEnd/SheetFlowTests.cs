@@ -92,6 +92,7 @@ public sealed partial class SheetFlowTests : IClassFixture<ServerFixture>
         await sheet.GetByTestId("bench-core-copy-link").ClickAsync();
 
         await Assertions.Expect(sheet.GetByTestId("core-name")).ToContainTextAsync("(measured AL)");
+        await Assertions.Expect(sheet.GetByTestId("value-al")).ToContainTextAsync("measured on the bench");
         await Assertions.Expect(sheet.Locator("body")).ToContainTextAsync("Gate drive, bench flow");
         await Assertions.Expect(sheet.Locator("body")).ToContainTextAsync("yours");
     }
