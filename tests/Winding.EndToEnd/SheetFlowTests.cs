@@ -59,6 +59,44 @@ public sealed partial class SheetFlowTests : IClassFixture<ServerFixture>
         }
     }
 
+    [SkippableFact]
+    public async Task SavedPlan_BenchResults_FlagOneOutside_AndTheMeasuredAlBecomesAUserCore()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/plan?demo=club-gate-drive"));
+        await Assertions.Expect(page.Locator("#windings-0-turns")).ToHaveValueAsync("16");
+        await page.Locator("#plan-name").FillAsync("Gate drive, bench flow");
+        await page.GetByTestId("save-plan").ClickAsync();
+        await Assertions.Expect(page.GetByTestId("save-message")).ToContainTextAsync("Saved");
+        var link = await page.GetByTestId("plan-link").GetAttributeAsync("href");
+
+        var sheet = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/" + link + "/sheet"));
+        await Assertions.Expect(sheet.GetByTestId("sheet-revision")).ToHaveTextAsync("revision 1");
+        await Assertions.Expect(sheet.GetByTestId("sheet-exports")).ToBeVisibleAsync();
+
+        // The inductance as the sheet expects it (within), and a DC resistance of a kilohm, far above any 16-turn winding.
+        var expected = (await sheet.Locator("[data-testid=check-w0-inductance] [data-cell=expected]").TextContentAsync())!.Trim();
+        await sheet.Locator("#measured-w0-inductance").FillAsync(expected);
+        await sheet.Locator("#measured-w0-inductance").PressAsync("Tab");
+        await sheet.Locator("#measured-w0-resistance").FillAsync("1 kΩ");
+        await sheet.Locator("#measured-w0-resistance").PressAsync("Tab");
+
+        await Assertions.Expect(sheet.GetByTestId("outcome-w0-inductance")).ToHaveAttributeAsync("data-verdict", "within");
+        await Assertions.Expect(sheet.GetByTestId("outcome-w0-resistance")).ToContainTextAsync("OUTSIDE: above the highest");
+        await Assertions.Expect(sheet.GetByTestId("bench-summary")).ToHaveTextAsync("1 measured value(s) outside the limits.");
+        await Assertions.Expect(sheet.GetByTestId("suggestion-coreal")).ToContainTextAsync("AL = L/N²");
+        await sheet.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "bench-results.png"), FullPage = true });
+
+        await sheet.GetByTestId("bench-update-core-al").ClickAsync();
+        await Assertions.Expect(sheet.GetByTestId("bench-message")).ToContainTextAsync("in your catalogue");
+        await sheet.GetByTestId("bench-core-copy-link").ClickAsync();
+
+        await Assertions.Expect(sheet.GetByTestId("core-name")).ToContainTextAsync("(measured AL)");
+        await Assertions.Expect(sheet.GetByTestId("value-al")).ToContainTextAsync("measured on the bench");
+        await Assertions.Expect(sheet.Locator("body")).ToContainTextAsync("Gate drive, bench flow");
+        await Assertions.Expect(sheet.Locator("body")).ToContainTextAsync("yours");
+    }
+
     /// <summary>A page object of a PDF: "/Type /Page" not followed by "s" (ISO 32000-1, 7.7.3.3).</summary>
     [GeneratedRegex(@"/Type\s*/Page(?![a-zA-Z])")]
     private static partial Regex PageObject();

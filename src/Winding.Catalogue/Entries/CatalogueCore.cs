@@ -1,4 +1,5 @@
 using Winding.Core.Geometry;
+using Winding.Core.Windings;
 
 namespace Winding.Catalogue.Entries;
 
@@ -10,4 +11,8 @@ namespace Winding.Catalogue.Entries;
 /// <param name="Source">Provenance of the values.</param>
 /// <param name="BuiltIn">True for an entry shipped with the app (read-only), false for a user entry.</param>
 /// <param name="Version">The user entry's saved version (1 and up); 0 for a built-in entry.</param>
-public sealed record CatalogueCore(string Id, string Name, CoreShape Shape, CatalogueMaterial Material, string Source, bool BuiltIn = true, int Version = 0);
+public sealed record CatalogueCore(string Id, string Name, CoreShape Shape, CatalogueMaterial Material, string Source, bool BuiltIn = true, int Version = 0)
+{
+    /// <summary>AL measured on a wound sample of one such core (<see cref="CoreEntryDocument.MeasuredAlNh"/>), or null.</summary>
+    public InductanceFactor? MeasuredAl { get; init; }
+}

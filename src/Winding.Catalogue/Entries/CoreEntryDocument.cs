@@ -31,6 +31,13 @@ public sealed class CoreEntryDocument
     /// <summary>AL from a datasheet in nH per turn² (bobbin cores, e.g. gapped).</summary>
     public double? AlNh { get; set; }
 
+    /// <summary>
+    /// AL measured on a wound sample of this core, nH per turn², for one core (any shape). When set it replaces the AL
+    /// worked out from the material and dimensions (or the datasheet <see cref="AlNh"/>) in every plan that uses the core;
+    /// <see cref="Source"/> says how it was measured. The bench sheet's "update the core's AL" writes it.
+    /// </summary>
+    public double? MeasuredAlNh { get; set; }
+
     /// <summary>Id of the material entry the core is made of.</summary>
     public string? MaterialId { get; set; }
 

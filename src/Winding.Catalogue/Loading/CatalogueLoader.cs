@@ -1,5 +1,6 @@
 using Winding.Catalogue.Entries;
 using Winding.Catalogue.Validation;
+using Winding.Core.Windings;
 
 namespace Winding.Catalogue.Loading;
 
@@ -15,6 +16,12 @@ public static class CatalogueLoader
 {
     /// <summary>Permeability range accepted for a material, 1 to 100 000.</summary>
     public const double MaximumPermeability = 100_000;
+
+    /// <summary>Lower bound (exclusive) of a core's measured AL, nH per turn² (as the plan's <c>measured.alNh</c>).</summary>
+    public const double MinimumMeasuredAlNh = 0.01;
+
+    /// <summary>Upper bound of a core's measured AL, nH per turn² (as the plan's <c>measured.alNh</c>).</summary>
+    public const double MaximumMeasuredAlNh = 1e7;
 
     /// <summary>Prefix of user file names in problems.</summary>
     public const string UserPrefix = "user/";
@@ -160,9 +167,13 @@ public static class CatalogueLoader
             validator.Add("materialId", $"No material with the id '{document.MaterialId}' is in the catalogue.");
         }
 
+        var measuredAl = document.MeasuredAlNh is null ? null : validator.Range("measuredAlNh", document.MeasuredAlNh, MinimumMeasuredAlNh, MaximumMeasuredAlNh, "nH", minimumExclusive: true);
         return !validator.IsValid || shape is null || material is null
             ? null
-            : new CatalogueCore(document.Id!, document.Name!, shape, material, document.Source ?? string.Empty, builtIn, version);
+            : new CatalogueCore(document.Id!, document.Name!, shape, material, document.Source ?? string.Empty, builtIn, version)
+            {
+                MeasuredAl = measuredAl is { } al ? InductanceFactor.FromHenriesPerTurnSquared(al * 1e-9) : null,
+            };
     }
 
     private static int VersionOf(LoadedFile file, FieldValidator validator)

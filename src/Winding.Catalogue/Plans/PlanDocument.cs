@@ -32,6 +32,9 @@ public sealed class PlanDocument
 
     /// <summary>Values measured on the built transformer that replace the estimates.</summary>
     public PlanMeasuredDocument? Measured { get; set; }
+
+    /// <summary>The bench sheet's measured values, kept with the plan (they replace no estimate).</summary>
+    public PlanBenchDocument? Bench { get; set; }
 }
 
 /// <summary>The response sweep in a plan document.</summary>

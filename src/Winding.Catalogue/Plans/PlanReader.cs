@@ -24,6 +24,9 @@ public static class PlanReader
     /// <summary>Most turns in one winding.</summary>
     public const int MaximumTurns = 100_000;
 
+    /// <summary>Most measured values in a plan's bench record.</summary>
+    public const int MaximumBenchValues = 100;
+
     /// <summary>Most identical cores in a stack.</summary>
     public const int MaximumStack = 100;
 
@@ -47,6 +50,7 @@ public static class PlanReader
         var windings = ReadWindings(v, document.Windings, core?.Shape);
         var operating = ReadOperating(v, document.Operating);
         var allowance = ReadAllowance(v, document.Allowance);
+        ReadBench(v, document.Bench);
         if (!v.IsValid || core is null || windings is null || allowance is null)
         {
             return new PlanReadResult(null, v.Errors);
@@ -80,6 +84,7 @@ public static class PlanReader
 
         CoreShape? shape = null;
         MagneticMaterial? material = null;
+        InductanceFactor? catalogueAl = null;
         if (!string.IsNullOrEmpty(document.CatalogueId))
         {
             if (document.DimensionsMm is not null || document.Shape is not null || document.Effective is not null || document.AlNh is not null || document.Family is not null)
@@ -94,6 +99,7 @@ public static class PlanReader
             {
                 shape = entry.Shape;
                 material = entry.Material.Material;
+                catalogueAl = entry.MeasuredAl;
             }
         }
         else
@@ -134,7 +140,12 @@ public static class PlanReader
             }
         }
 
-        return shape is null || material is null || stack is null ? null : new PlanCore(shape, stack.Value, material);
+        // A catalogue core's measured AL is for one core; identical cores side by side add their AL (their Ae adds,
+        // le is the same: AL = μ0·μe·Ae/le, IEC 60205). A different material id makes it not apply.
+        var measuredAl = catalogueAl is { } one && document.MaterialId is null && document.InitialPermeability is null && stack is not null
+            ? InductanceFactor.FromHenriesPerTurnSquared(one.HenriesPerTurnSquared * stack.Value)
+            : (InductanceFactor?)null;
+        return shape is null || material is null || stack is null ? null : new PlanCore(shape, stack.Value, material) { MeasuredAl = measuredAl };
     }
 
     private static List<WindingSpec>? ReadWindings(FieldValidator v, List<PlanWindingDocument?>? documents, CoreShape? shape)
@@ -358,6 +369,49 @@ public static class PlanReader
         }
 
         return v.Errors.Count != before ? null : new MeasuredValues(al * 1e-9, leakage, interwinding, selfCapacitances);
+    }
+
+    /// <summary>Checks the bench record: known-looking check ids, finite positive values, a real date, a version.</summary>
+    private static void ReadBench(FieldValidator v, PlanBenchDocument? document)
+    {
+        if (document is null)
+        {
+            return;
+        }
+
+        if (document.MeasuredOn is not null
+            && !DateOnly.TryParseExact(document.MeasuredOn, "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out _))
+        {
+            v.Add("bench.measuredOn", $"'{document.MeasuredOn}' is not a date: write it as yyyy-mm-dd.");
+        }
+
+        if (document.PlanVersion is not null)
+        {
+            v.WholeRange("bench.planVersion", document.PlanVersion, 1, int.MaxValue, "versions");
+        }
+
+        var values = document.Values ?? [];
+        if (values.Count > MaximumBenchValues)
+        {
+            v.Add("bench.values", $"At most {MaximumBenchValues} measured values.");
+            return;
+        }
+
+        foreach (var (id, value) in values)
+        {
+            if (!EntryId.IsValid(id) || id.Length > 40)
+            {
+                v.Add("bench.values", $"'{id}' is not a check id: lower-case letters, digits and single hyphens, at most 40 characters (e.g. w0-inductance).");
+            }
+            else if (value is null)
+            {
+                v.Add($"bench.values.{id}", "Required: the measured value in SI, or leave the check out.");
+            }
+            else
+            {
+                v.Range($"bench.values.{id}", value.Value, 0, 1e15, string.Empty, minimumExclusive: true);
+            }
+        }
     }
 
     private static WireLengthAllowance? ReadAllowance(FieldValidator v, PlanAllowanceDocument? document)

@@ -529,6 +529,7 @@ public sealed class PlanningState
             Sweep = _loaded?.Sweep,
             Options = _loaded?.Options,
             Measured = _loaded?.Measured,
+            Bench = _loaded?.Bench,
         };
     }
 

@@ -47,7 +47,24 @@ public sealed class SheetLoader
 
         document.Name = read.Plan.Name ?? document.Name;
         var version = read.Plan.Version ?? 0;
-        return FromDocument(document, version, version > 0 ? $"revision {version}" : "saved, no revision number", href);
+        return FromDocument(document, version, version > 0 ? $"revision {version}" : "saved, no revision number", href) with
+        {
+            SavedId = id,
+            SavedVersion = version,
+            NotSavedReason = null,
+        };
+    }
+
+    /// <summary>
+    /// After the sheet page saved a new version of the plan <paramref name="id"/>: the plan page's form is reloaded when
+    /// it shows that plan, so that its next save does not meet a version conflict.
+    /// </summary>
+    public void PlanSaved(string id)
+    {
+        if (_planning.SavedId == id)
+        {
+            _planning.LoadSaved(id);
+        }
     }
 
     /// <summary>The sheet of the demo plan <paramref name="id"/>.</summary>
@@ -55,7 +72,10 @@ public sealed class SheetLoader
     {
         var href = "plan?demo=" + Uri.EscapeDataString(id);
         return DemoPlans.Find(id) is { } demo
-            ? FromDocument(demo.Document, 0, "demo plan, not saved", href)
+            ? FromDocument(demo.Document, 0, "demo plan, not saved", href) with
+            {
+                NotSavedReason = "This is a demo plan: save it as your own plan on the plan page first, then open its bench sheet to keep measured values or update the core.",
+            }
             : new SheetLoadResult(null, $"There is no demo plan '{id}'.", "plan");
     }
 
@@ -72,10 +92,19 @@ public sealed class SheetLoader
         }
 
         var document = _planning.ToDocument();
-        var (revision, words) = _planning.SavedId is { } savedId && Unchanged(savedId, document)
+        var unchanged = _planning.SavedId is { } savedId && Unchanged(savedId, document);
+        var (revision, words) = unchanged
             ? (_planning.SavedVersion, $"revision {_planning.SavedVersion}")
             : (0, _planning.SavedId is null ? "not saved" : $"changed since revision {_planning.SavedVersion}, not saved");
-        return new SheetLoadResult(SheetViewBuilder.Build(plan, evaluation, CoreName(document), Today, revision, words), null, href);
+        return new SheetLoadResult(SheetViewBuilder.Build(plan, evaluation, CoreName(document), Today, revision, words), null, href)
+        {
+            Document = document,
+            SavedId = unchanged ? _planning.SavedId : null,
+            SavedVersion = unchanged ? _planning.SavedVersion : 0,
+            NotSavedReason = unchanged ? null
+                : _planning.SavedId is null ? "This plan is not saved: save it on the plan page first to keep measured values or update the core."
+                : $"The plan on the plan page has changed since revision {_planning.SavedVersion}: save it there first to keep measured values or update the core.",
+        };
     }
 
     /// <summary>The sheet of a plan document (also used by the API).</summary>
@@ -89,7 +118,11 @@ public sealed class SheetLoader
         }
 
         var plan = read.Plan!;
-        return new SheetLoadResult(SheetViewBuilder.Build(plan, PlanEvaluator.Evaluate(plan), CoreName(document), Today, revision, revisionText), null, planHref);
+        return new SheetLoadResult(SheetViewBuilder.Build(plan, PlanEvaluator.Evaluate(plan), CoreName(document), Today, revision, revisionText), null, planHref)
+        {
+            Document = document,
+            NotSavedReason = "This plan is not saved: save it on the plan page first to keep measured values or update the core.",
+        };
     }
 
     private string? CoreName(PlanDocument document) => SheetViewBuilder.CoreName(document, _catalogue.Catalogue);

@@ -1,5 +1,7 @@
 using Microsoft.AspNetCore.Components;
 using Microsoft.JSInterop;
+using Winding.Catalogue.Plans;
+using Winding.Web.Hosting;
 using Winding.Web.Sheets;
 
 namespace Winding.Web.Components.Pages;
@@ -14,12 +16,24 @@ public sealed partial class SheetPage
     private SheetLoadResult _result = new(null, "No plan.", "plan");
     private SheetPaper _paper = SheetPaper.A4;
     private string? _shown;
+    private BenchResultsState? _bench;
+    private string? _message;
+    private bool _messageSucceeded;
 
     [Inject]
     private SheetLoader Loader { get; set; } = default!;
 
     [Inject]
     private IJSRuntime Js { get; set; } = default!;
+
+    [Inject]
+    private CatalogueProvider Catalogue { get; set; } = default!;
+
+    [Inject]
+    private PlanStore Plans { get; set; } = default!;
+
+    [Inject]
+    private TimeProvider Time { get; set; } = default!;
 
     /// <summary>A saved plan's id (<c>/plan/{id}/sheet</c>).</summary>
     [Parameter]
@@ -46,11 +60,34 @@ public sealed partial class SheetPage
 
         _shown = key;
         _paper = SheetPapers.TryParse(PaperQuery, out var paper) ? paper : SheetPaper.A4;
+        _message = null;
+        Load(texts: null);
+    }
+
+    private void Load(IReadOnlyDictionary<string, string>? texts)
+    {
         _result = !string.IsNullOrEmpty(PlanId)
             ? Loader.Saved(PlanId)
             : !string.IsNullOrEmpty(DemoQuery)
                 ? Loader.Demo(DemoQuery)
                 : Loader.Current();
+        _bench = _result.View is null ? null : new BenchResultsState(Catalogue, Plans, Time, _result, texts);
+    }
+
+    /// <summary>Shows what a bench-results button did; builds the sheet again when the plan or its core changed.</summary>
+    private void Acted(BenchActionResult result)
+    {
+        _message = result.Message;
+        _messageSucceeded = result.Succeeded;
+        if (result.Reload)
+        {
+            if (_result.SavedId is { } id)
+            {
+                Loader.PlanSaved(id);
+            }
+
+            Load(_bench?.Texts.ToDictionary(StringComparer.Ordinal));
+        }
     }
 
     private async Task PrintAsync() => await Js.InvokeVoidAsync("print");
