@@ -168,5 +168,54 @@ public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
         await Assertions.Expect(table).ToContainTextAsync("12 :");
         await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "variant-compare.png"), FullPage = true });
     }
-}
 
+    /// <summary>build a plan from scratch on a salvaged core typed on the plan page</summary>
+    [SkippableFact]
+    public async Task BuildAPlanFromScratch_OnASalvagedCoreTypedOnThePlanPage()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/plan"));
+
+        await page.GetByTestId("core-source-typed").ClickAsync();
+        await page.Locator("#core-outerDiameter").FillAsync("23");
+        await page.Locator("#core-innerDiameter").FillAsync("14");
+        await page.Locator("#core-height").FillAsync("7");
+        await page.Locator("#core-measured-al").FillAsync("120");
+        await page.Locator("#windings-0-turns").FillAsync("6");
+        await ChooseWireKind(page, 0, "AWG enamelled");
+        await page.Locator("#windings-0-awg").FillAsync("26");
+        await ChooseWireKind(page, 1, "Litz");
+        await page.Locator("#windings-1-litz-strands").FillAsync("20");
+        await page.Locator("#windings-1-litz-strand").FillAsync("0.1");
+        await page.Locator("#windings-1-litz-bundle").FillAsync("0.6");
+
+        // L = AL·N² (definition of AL): 120 nH × 6² = 4.32 µH.
+        var inductance = page.Locator("[data-testid=value-w0-inductance]");
+        await Assertions.Expect(inductance).ToHaveTextAsync("4.32 µH");
+        await Assertions.Expect(page.Locator("[data-testid=value-w0-wire]")).ToContainTextAsync("AWG 26");
+        await Assertions.Expect(page.Locator("[data-testid=value-w1-wire]")).ToContainTextAsync("Litz 20");
+        await Assertions.Expect(page.Locator("[data-testid=value-w1-fits]")).ToContainTextAsync("fits");
+        await Assertions.Expect(page.GetByTestId("cross-section-svg")).ToBeVisibleAsync();
+        await Assertions.Expect(page.GetByTestId("response-chart")).ToBeVisibleAsync();
+        await page.Locator("#plan-name").FillAsync("Salvaged ring, AWG and Litz");
+        await page.GetByTestId("save-plan").ClickAsync();
+        await Assertions.Expect(page.GetByTestId("save-message")).ToContainTextAsync("Saved");
+        var link = await page.GetByTestId("plan-link").GetAttributeAsync("href");
+        await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "plan-page-salvaged-core.png"), FullPage = true });
+
+        var reloaded = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/" + link));
+
+        await Assertions.Expect(reloaded.Locator("#core-outerDiameter")).ToHaveValueAsync("23");
+        await Assertions.Expect(reloaded.Locator("#core-measured-al")).ToHaveValueAsync("120");
+        await Assertions.Expect(reloaded.Locator("#windings-0-awg")).ToHaveValueAsync("26");
+        await Assertions.Expect(reloaded.Locator("#windings-1-litz-strands")).ToHaveValueAsync("20");
+        await Assertions.Expect(reloaded.Locator("[data-testid=value-w0-inductance]")).ToHaveTextAsync("4.32 µH");
+    }
+
+    private static async Task ChooseWireKind(IPage page, int winding, string kind)
+    {
+        await page.GetByTestId($"windings-{winding}-wire-kind").ClickAsync();
+        await page.GetByRole(AriaRole.Option, new PageGetByRoleOptions { Name = kind, Exact = true }).ClickAsync();
+        await Assertions.Expect(page.GetByTestId($"windings-{winding}-wire-kind")).ToHaveValueAsync(kind);
+    }
+}

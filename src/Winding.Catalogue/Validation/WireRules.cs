@@ -160,7 +160,10 @@ public static class WireRules
 
         if (document.OverallDiameterMm is null)
         {
-            return WindingWire.Enamelled(Length.FromMillimetres(conductor.Value));
+            var enamelled = WindingWire.Enamelled(Length.FromMillimetres(conductor.Value));
+            return metal == ConductorMaterial.Copper
+                ? enamelled
+                : WindingWire.Solid(enamelled.StrandDiameter, enamelled.ElementOverallDiameter, metal, enamelled.Description + ", " + metal.Name, overallDiameterAssumed: true);
         }
 
         var overall = v.Range($"{prefix}.overallDiameterMm", document.OverallDiameterMm, MinimumWireMm, MaximumWireMm * 1.5, "mm");

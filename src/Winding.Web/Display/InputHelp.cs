@@ -4,7 +4,8 @@ namespace Winding.Web.Display;
 
 /// <summary>
 /// What each plan input means, with where its rule comes from, shown as the field's tooltip. Keyed by the field id;
-/// a winding's fields (<c>windings-2-turns</c>) share the definition of their last part (<c>turns</c>).
+/// a winding's fields (<c>windings-2-turns</c>) share the definition of their last part (<c>turns</c>), and a typed core's
+/// dimensions on the plan page (<c>core-outerDiameter</c>) share the catalogue editor's (<c>edit-outerDiameter</c>).
 /// </summary>
 public static partial class InputHelp
 {
@@ -48,6 +49,27 @@ public static partial class InputHelp
         ["edit-legDepth"] = "Depth of a rectangular centre leg. " + Units,
         ["edit-bobbinWall"] = "Thickness of the bobbin wall between the leg and the first layer. " + Units,
         ["taps"] = "Turn counts at which a tap is brought out, counted from the winding's start, separated by commas.",
+        ["wire-kind"] = "How the wire is described: a wire from the built-in table, a metric enamelled size and grade (IEC 60317), an AWG size and film build (ASTM B258 diameters, NEMA MW 1000 builds), a Litz bundle, hook-up wire with a thick insulation, or diameters measured with a micrometer.",
+        ["metric-size"] = "Nominal bare diameter of metric enamelled wire, one of the IEC 60317-0-1 sizes (e.g. 0.50, 0.56, 0.63 mm); its overall diameter comes from that standard's table for the grade. " + Units,
+        ["grade"] = "Enamel grade of metric wire per IEC 60317-0-1: grade 1 has the thinnest film, grade 3 the thickest (more voltage between turns, fewer turns per layer).",
+        ["awg"] = "American Wire Gauge size from 10 to 44; the bare diameter follows ASTM B258 (e.g. AWG 24 = 0.0201 in).",
+        ["build"] = "Film build of AWG magnet wire (NEMA MW 1000): single, or heavy with about twice the film.",
+        ["litz-strands"] = "Number of insulated strands in the Litz bundle (at least 2). The strands share the current, so each one's skin effect counts, not the bundle's (Sullivan 1999).",
+        ["litz-strand"] = "Bare diameter of one strand of the Litz bundle, as on its label (e.g. 0.1 mm). " + Units,
+        ["litz-bundle"] = "Overall diameter of the Litz bundle over its serving, measured with a micrometer: what sets how many turns fit per layer. " + Units,
+        ["hookup-conductor"] = "Diameter of the hook-up wire's conductor (the bare copper, or the diameter of equal area for a stranded conductor). " + Units,
+        ["hookup-insulation"] = "Radial thickness of the hook-up wire's insulation (PVC, PTFE, silicone): (overall diameter − conductor diameter) / 2. " + Units,
+        ["metal"] = "Conductor metal: copper (IEC 60028, 1/58 Ω·mm²/m at 20 °C) or aluminium (61 % IACS, about 1.6 times the resistance of copper of the same size).",
+        ["core-shape"] = "Shape of the typed core: a ring (toroid), a sleeve (tube, solid or split clamp-on), a two-hole core, or a bobbin core with entered effective parameters.",
+        ["core-family"] = "Family of a bobbin core (E, pot, RM-like or other); it only names the core.",
+        ["core-effective-area"] = "Effective cross-section Ae in mm² from the core's data (IEC 60205); a bobbin core needs it, a two-hole core may override its estimate.",
+        ["core-effective-length"] = "Effective magnetic path length le from the core's data (IEC 60205), with the area. " + Units,
+        ["core-datasheet-al"] = "AL of the bobbin core from its data, nH per turn² (L = AL·N²); empty to compute it from μi and Ae/le.",
+        ["core-material-basis"] = "What the core's magnetic behaviour is taken from: an AL measured on this very core (test turns, AL = L/N², IEC 62044-2), a generic material class from the catalogue, or an initial permeability μi you know.",
+        ["core-material"] = "A generic material class from the catalogue: its μ′, μ″ against frequency, loss and saturation are used.",
+        ["core-mu"] = "Initial relative permeability μi of the core material at low excitation (IEC 60401-3 notation); a frequency-independent material is assumed.",
+        ["core-measured-al"] = "AL measured on this core, nH per turn²: wind a few turns spread round it, measure L at a low level well below the winding's resonance, AL = L/N² (IEC 62044-2). Given, it replaces the computed AL everywhere. A plain number is nH; 0.12 µH is understood.",
+        ["core-stack"] = "Identical cores stacked side by side and wound as one (area and AL add up); empty for one core.",
     };
 
     /// <summary>The definition for the field <paramref name="id"/>, or null when there is none.</summary>
@@ -60,6 +82,7 @@ public static partial class InputHelp
 
         return Definitions.TryGetValue(id, out var text) ? text
             : WindingField().Match(id) is { Success: true } m && Definitions.TryGetValue(m.Groups[1].Value, out var shared) ? shared
+            : id.StartsWith("core-", StringComparison.Ordinal) && Definitions.TryGetValue("edit-" + id["core-".Length..], out var dimension) ? dimension
             : null;
     }
 

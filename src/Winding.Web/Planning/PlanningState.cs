@@ -69,6 +69,57 @@ public sealed class PlanningState
     /// <summary>The selected catalogue core id.</summary>
     public string? CoreId { get; private set; }
 
+    /// <summary>Whether the core is picked from the catalogue or typed on the page.</summary>
+    public CoreSource CoreSource { get; private set; } = CoreSource.Catalogue;
+
+    /// <summary>The core typed on the page (kept while a catalogue core is used, so switching back restores it).</summary>
+    public CoreDraft TypedCore { get; private set; } = new();
+
+    /// <summary>Number of identical cores stacked, as typed (empty: 1); applies to either source.</summary>
+    public string Stack { get; private set; } = string.Empty;
+
+    /// <summary>The catalogue's materials, for a typed core's material class.</summary>
+    public IReadOnlyList<CatalogueMaterial> Materials => _catalogue.Catalogue.Materials;
+
+    /// <summary>
+    /// The material's words for the results: the catalogue material's name, the typed μi, or the measured AL it was
+    /// taken from; null while there is no result.
+    /// </summary>
+    public string? CoreMaterialName => Plan is not { } plan ? null
+        : CoreSource == CoreSource.Catalogue ? SelectedCore?.Material.Name ?? plan.Core.Material.Name
+        : TypedCore.MaterialBasis == CoreMaterialBasis.MaterialClass && TypedCore.MaterialId is { } id && _catalogue.Catalogue.MaterialsById.TryGetValue(id, out var m) ? m.Name
+        : TypedCore.MaterialBasis == CoreMaterialBasis.MeasuredAl ? "from the measured AL" + string.Create(CultureInfo.InvariantCulture, $" (μe {plan.Core.Material.InitialPermeability:0.#})")
+        : plan.Core.Material.Name;
+
+    /// <summary>The AL tolerance the results quote: ±5 % for a measured AL, else the material's (as the bench sheet).</summary>
+    public double AlTolerance => Plan is { } plan ? Winding.Core.Sheets.BenchSheetBuilder.AlTolerance(plan.Core) : 0;
+
+    /// <summary>Uses the catalogue core or the typed core.</summary>
+    public void UseCoreSource(CoreSource source)
+    {
+        CoreSource = source;
+        _suggestions.Clear();
+        Recalculate();
+    }
+
+    /// <summary>Changes the typed core (and makes it the plan's core) and recalculates.</summary>
+    public void EditTypedCore(Action<CoreDraft> edit)
+    {
+        ArgumentNullException.ThrowIfNull(edit);
+        edit(TypedCore);
+        CoreSource = CoreSource.Typed;
+        _suggestions.Clear();
+        Recalculate();
+    }
+
+    /// <summary>Sets the number of stacked cores as typed and recalculates.</summary>
+    public void EditStack(string? text)
+    {
+        Stack = text ?? string.Empty;
+        _suggestions.Clear();
+        Recalculate();
+    }
+
     /// <summary>The selected core, if any.</summary>
     public CatalogueCore? SelectedCore => CoreId is not null && _catalogue.Catalogue.CoresById.TryGetValue(CoreId, out var c) ? c : null;
 
@@ -100,6 +151,8 @@ public sealed class PlanningState
     public void SelectCore(string? id)
     {
         CoreId = id;
+        CoreSource = CoreSource.Catalogue;
+        _suggestions.Clear();
         Recalculate();
     }
 
@@ -230,6 +283,7 @@ public sealed class PlanningState
         ArgumentNullException.ThrowIfNull(choice);
         EditWinding(index, w =>
         {
+            w.WireForm = WireForm.Table;
             w.StandardId = choice.StandardId;
             w.StrandsInHand = choice.StrandsInHand > 1 ? choice.StrandsInHand.ToString(System.Globalization.CultureInfo.InvariantCulture) : string.Empty;
         });
@@ -358,15 +412,31 @@ public sealed class PlanningState
     }
 
     /// <summary>
-    /// Loads a plan document into the form: its catalogue core, windings, operating conditions; what the form does not
-    /// edit (inline cores, stacks, placements, wraps, taps, special wires, sweep, options, measured values) is kept as is.
+    /// Loads a plan document into the form: its core (catalogue or typed), windings with their wire in any form, and
+    /// operating conditions. What the form does not edit (placements and wraps beyond their fields, target inductances,
+    /// sweep, options, measured values other than a typed core's AL) is kept as is, so exporting an untouched form gives
+    /// the document back.
     /// </summary>
     public void Load(PlanDocument document)
     {
         ArgumentNullException.ThrowIfNull(document);
         PlanName = document.Name ?? string.Empty;
         _loaded = document;
-        CoreId = document.Core?.CatalogueId;
+        var core = document.Core;
+        Stack = DraftReading.Show(core?.Stack);
+        if (core is not null && string.IsNullOrEmpty(core.CatalogueId))
+        {
+            CoreSource = CoreSource.Typed;
+            CoreId = null;
+            TypedCore = CoreDrafts.Load(core, document.Measured?.AlNh);
+        }
+        else
+        {
+            CoreSource = CoreSource.Catalogue;
+            CoreId = core?.CatalogueId;
+            TypedCore = new CoreDraft();
+        }
+
         _windings.Clear();
         foreach (var w in document.Windings ?? [])
         {
@@ -375,36 +445,31 @@ public sealed class PlanningState
                 continue;
             }
 
-            var wire = w.Wire;
-            var custom = wire is { ConductorDiameterMm: not null, Litz: null, HookUp: null };
-            _windings.Add(new WindingDraft
+            var draft = new WindingDraft
             {
                 Name = w.Name ?? string.Empty,
-                Turns = w.Turns?.ToString(CultureInfo.InvariantCulture) ?? string.Empty,
-                StandardId = wire?.StandardId,
-                ConductorDiameter = custom ? LengthText.ForDraft(wire!.ConductorDiameterMm) : string.Empty,
-                OverallDiameter = custom ? LengthText.ForDraft(wire!.OverallDiameterMm) : string.Empty,
-                StrandsInHand = wire?.StrandsInHand?.ToString(CultureInfo.InvariantCulture) ?? string.Empty,
-                RmsCurrent = Show(w.RmsCurrentA),
-                ImportedWire = wire is not null && wire.StandardId is null && !custom ? wire : null,
+                Turns = DraftReading.Show(w.Turns),
+                RmsCurrent = DraftReading.Show(w.RmsCurrentA),
                 Placement = w.Placement,
                 Insulation = w.Insulation,
                 TapsText = w.Taps is { Count: > 0 } taps ? string.Join(", ", taps) : string.Empty,
                 TargetInductanceH = w.TargetInductanceH,
-            });
+            };
+            WireDrafts.Load(draft, w.Wire);
+            _windings.Add(draft);
         }
 
         if (document.Operating is { } op)
         {
             Operating.Enabled = true;
-            Operating.MinFrequency = Show(op.MinFrequencyHz);
-            Operating.MaxFrequency = Show(op.MaxFrequencyHz);
-            Operating.SourceResistance = Show(op.SourceResistanceOhm);
-            Operating.LoadResistance = Show(op.LoadResistanceOhm);
-            Operating.DriveVoltage = Show(op.DriveVoltageRms);
+            Operating.MinFrequency = DraftReading.Show(op.MinFrequencyHz);
+            Operating.MaxFrequency = DraftReading.Show(op.MaxFrequencyHz);
+            Operating.SourceResistance = DraftReading.Show(op.SourceResistanceOhm);
+            Operating.LoadResistance = DraftReading.Show(op.LoadResistanceOhm);
+            Operating.DriveVoltage = DraftReading.Show(op.DriveVoltageRms);
             Operating.Waveform = op.Waveform ?? "sine";
-            Operating.DutyCycle = op.DutyCycle is null ? "0.5" : Show(op.DutyCycle);
-            Operating.AmbientTemperature = op.AmbientTemperatureC is null ? "25" : Show(op.AmbientTemperatureC);
+            Operating.DutyCycle = op.DutyCycle is null ? "0.5" : DraftReading.Show(op.DutyCycle);
+            Operating.AmbientTemperature = DraftReading.Show(op.AmbientTemperatureC);
         }
         else
         {
@@ -414,8 +479,6 @@ public sealed class PlanningState
         _suggestions.Clear();
         Recalculate();
     }
-
-    private static string Show(double? value) => value?.ToString("G6", CultureInfo.InvariantCulture) ?? string.Empty;
 
     /// <summary>The plan document for the current inputs (what the API would be sent).</summary>
     public PlanDocument ToDocument()
@@ -443,7 +506,10 @@ public sealed class PlanningState
             {
                 foreach (var error in read.Errors)
                 {
-                    _errors.TryAdd(PageField(error), error.Message);
+                    if (PageField(error) is { } field)
+                    {
+                        _errors.TryAdd(field, error.Message);
+                    }
                 }
             }
         }
@@ -451,20 +517,63 @@ public sealed class PlanningState
         Changed?.Invoke();
     }
 
-    /// <summary>The page field that shows an error: the path itself, or the nearest field the page has.</summary>
-    private static string PageField(FieldError error) => error.Field switch
+    /// <summary>
+    /// The page field that shows a reader error: the path itself where the page has that field, else the nearest field
+    /// (a typed core's other problems show at the core panel; a wire given in several forms at the wire kind).
+    /// Null to leave out the reader's "no material" when a typed core's μi follows from its measured AL and the shape is
+    /// not valid yet (the shape's own errors say why).
+    /// </summary>
+    private string? PageField(FieldError error)
     {
-        var f when f.StartsWith("core", StringComparison.Ordinal) => "core",
-        var f when f.EndsWith(".wire.standardId", StringComparison.Ordinal) => f[..^".standardId".Length] + ".conductorDiameterMm",
-        var f when f.EndsWith(".wire", StringComparison.Ordinal) => f + ".conductorDiameterMm",
-        var f => f,
-    };
+        var f = error.Field;
+        if (f.StartsWith("core", StringComparison.Ordinal) || f.StartsWith("measured.alNh", StringComparison.Ordinal))
+        {
+            if (f == "core.stack")
+            {
+                return f;
+            }
+
+            if (CoreSource == CoreSource.Catalogue)
+            {
+                return f.StartsWith("core", StringComparison.Ordinal) ? "core" : f;
+            }
+
+            var fromAl = TypedCore.MaterialBasis == CoreMaterialBasis.MeasuredAl;
+            return f switch
+            {
+                "core.materialId" when fromAl => null,
+                "core.initialPermeability" when fromAl => "measured.alNh",
+                "core.shape" or "core.family" or "core.alNh" or "core.materialId" or "core.initialPermeability" or "measured.alNh" => f,
+                "core.effective" => "core.effective.areaMm2",
+                "core.effective.areaMm2" or "core.effective.lengthMm" when TypedCore.TakesEffective => f,
+                _ when f.StartsWith("core.dimensionsMm.", StringComparison.Ordinal) && TypedCore.ShownDimensions.Contains(f["core.dimensionsMm.".Length..]) => f,
+                _ => "core",
+            };
+        }
+
+        return f;
+    }
 
     private PlanDocument BuildDocument(Dictionary<string, string> errors)
     {
-        if (CoreId is null)
+        var stack = DraftReading.Whole(errors, "core.stack", Stack, "Cores stacked", required: false);
+        PlanCoreDocument core;
+        double? typedAl = null;
+        if (CoreSource == CoreSource.Typed)
         {
-            errors["core"] = "Pick a core.";
+            (core, typedAl) = CoreDrafts.Build(TypedCore, stack, errors);
+        }
+        else
+        {
+            if (CoreId is null)
+            {
+                errors["core"] = "Pick a core.";
+            }
+
+            var loadedCore = _loaded?.Core;
+            core = loadedCore is not null && loadedCore.CatalogueId == CoreId && !string.IsNullOrEmpty(CoreId)
+                ? new PlanCoreDocument { CatalogueId = CoreId, MaterialId = loadedCore.MaterialId, InitialPermeability = loadedCore.InitialPermeability, Stack = stack }
+                : new PlanCoreDocument { CatalogueId = CoreId, Stack = stack };
         }
 
         var windings = new List<PlanWindingDocument?>();
@@ -472,24 +581,10 @@ public sealed class PlanningState
         {
             var draft = _windings[i];
             var prefix = $"windings[{i}]";
-            var wire = new PlanWireDocument { StrandsInHand = Whole(errors, $"{prefix}.wire.strandsInHand", draft.StrandsInHand, "Wires in hand", required: false) };
-            if (draft.ImportedWire is { } imported)
-            {
-                wire = imported;
-            }
-            else if (draft.StandardId is not null)
-            {
-                wire.StandardId = draft.StandardId;
-            }
-            else
-            {
-                wire.ConductorDiameterMm = Length(errors, $"{prefix}.wire.conductorDiameterMm", draft.ConductorDiameter, "Conductor diameter", required: true);
-                wire.OverallDiameterMm = Length(errors, $"{prefix}.wire.overallDiameterMm", draft.OverallDiameter, "Overall diameter", required: false);
-            }
-
+            var wire = WireDrafts.Build(draft, $"{prefix}.wire", errors);
             windings.Add(new PlanWindingDocument
             {
-                Name = draft.Name,
+                Name = DraftReading.Word(draft.Name) is null ? null : draft.Name,
                 Turns = Whole(errors, $"{prefix}.turns", draft.Turns, "Turns", required: true),
                 Wire = wire,
                 RmsCurrentA = Number(errors, $"{prefix}.rmsCurrentA", draft.RmsCurrent, "RMS current", "A", required: false),
@@ -513,71 +608,57 @@ public sealed class PlanningState
                 Waveform = Operating.Waveform,
                 DutyCycle = Operating.Waveform == "pulse" ? Number(errors, "operating.dutyCycle", Operating.DutyCycle, "Duty cycle", string.Empty, required: true) : null,
                 AmbientTemperatureC = Number(errors, "operating.ambientTemperatureC", Operating.AmbientTemperature, "Ambient temperature", "°C", required: false),
+                ReactanceFactor = _loaded?.Operating?.ReactanceFactor,
             };
         }
 
-        var loadedCore = _loaded?.Core;
         return new PlanDocument
         {
             Name = string.IsNullOrWhiteSpace(PlanName) ? null : PlanName,
-            Core = loadedCore is not null && loadedCore.CatalogueId == CoreId
-                ? loadedCore
-                : new PlanCoreDocument { CatalogueId = CoreId, Stack = loadedCore?.Stack },
+            Core = core,
             Windings = windings,
             Operating = operating,
             Allowance = _loaded?.Allowance,
             Sweep = _loaded?.Sweep,
             Options = _loaded?.Options,
-            Measured = _loaded?.Measured,
+            Measured = Measured(typedAl),
             Bench = _loaded?.Bench,
         };
     }
 
-    private static double? Number(Dictionary<string, string> errors, string path, string text, string label, string unit, bool required)
-    {
-        if (string.IsNullOrWhiteSpace(text))
-        {
-            if (required)
-            {
-                errors[path] = $"{label}: required{(unit.Length > 0 ? $", in {unit}" : string.Empty)}.";
-            }
-
-            return null;
-        }
-
-        var value = EngineeringNumber.TryParse(text, unit);
-        if (value is null)
-        {
-            errors[path] = $"{label}: '{text.Trim()}' is not a number{(unit.Length > 0 ? $" in {unit}" : string.Empty)}.";
-        }
-
-        return value;
-    }
-
     /// <summary>
-    /// A length field's draft text in millimetres: a plain number is millimetres, a number with a unit (mm, in, mil, ")
-    /// is converted exactly (<see cref="LengthText"/>). The page's length fields write such texts (<c>LengthField</c>).
+    /// The plan's measured values: as loaded, with the measured AL taken from the typed core while it is used (a
+    /// catalogue core keeps the loaded AL only when the loaded plan's core was a catalogue core too).
     /// </summary>
-    private static double? Length(Dictionary<string, string> errors, string path, string text, string label, bool required)
+    private PlanMeasuredDocument? Measured(double? typedAl)
     {
-        if (string.IsNullOrWhiteSpace(text))
+        var loaded = _loaded?.Measured;
+        var loadedTyped = _loaded?.Core is { } c && string.IsNullOrEmpty(c.CatalogueId);
+        if (CoreSource == CoreSource.Catalogue && !loadedTyped)
         {
-            if (required)
-            {
-                errors[path] = $"{label}: required, in mm or with a unit (0.5 mm, 0.02 in, 20 mil).";
-            }
+            return loaded;
+        }
 
+        var al = CoreSource == CoreSource.Typed ? typedAl : null;
+        if (loaded is null && al is null)
+        {
             return null;
         }
 
-        var reading = LengthText.Read(text, LengthUnit.Millimetre);
-        if (reading.Millimetres is null)
+        var measured = new PlanMeasuredDocument
         {
-            errors[path] = $"{label}: '{text.Trim()}' {reading.Problem}.";
-        }
-
-        return reading.Millimetres;
+            AlNh = al,
+            LeakageInductanceH = loaded?.LeakageInductanceH,
+            InterwindingCapacitanceF = loaded?.InterwindingCapacitanceF,
+            SelfCapacitanceF = loaded?.SelfCapacitanceF,
+        };
+        return measured.AlNh is null && measured.LeakageInductanceH is null && measured.InterwindingCapacitanceF is null && measured.SelfCapacitanceF is null && loaded?.AlNh is not null
+            ? null
+            : measured;
     }
+
+    private static double? Number(Dictionary<string, string> errors, string path, string text, string label, string unit, bool required) =>
+        DraftReading.Number(errors, path, text, label, unit, required);
 
     private static List<int>? Taps(Dictionary<string, string> errors, string path, string text)
     {
@@ -601,20 +682,6 @@ public sealed class PlanningState
         return taps;
     }
 
-    private static int? Whole(Dictionary<string, string> errors, string path, string text, string label, bool required)
-    {
-        var value = Number(errors, path, text, label, string.Empty, required);
-        if (value is null)
-        {
-            return null;
-        }
-
-        if (value != Math.Floor(value.Value) || Math.Abs(value.Value) > int.MaxValue)
-        {
-            errors[path] = $"{label}: '{text.Trim()}' is not a whole number.";
-            return null;
-        }
-
-        return (int)value.Value;
-    }
+    private static int? Whole(Dictionary<string, string> errors, string path, string text, string label, bool required) =>
+        DraftReading.Whole(errors, path, text, label, required);
 }

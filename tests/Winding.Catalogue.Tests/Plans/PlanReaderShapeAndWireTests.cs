@@ -67,6 +67,22 @@ public sealed class PlanReaderShapeAndWireTests
         Assert.Equal(ConductorMaterial.Aluminium, plan.Windings[5].Wire.Metal);
     }
 
+    [Fact]
+    public void Read_CustomAluminiumWithoutOverall_KeepsTheMetalAndTheAssumedEnamel()
+    {
+        var plan = Valid("""
+            { "core": { "catalogueId": "toroid-36x23x15-nizn-125" }, "windings": [
+              { "turns": 2, "wire": { "conductorDiameterMm": 0.5, "metal": "aluminium" } },
+              { "turns": 2, "wire": { "conductorDiameterMm": 0.5 } }
+            ] }
+            """);
+
+        Assert.Equal(ConductorMaterial.Aluminium, plan.Windings[0].Wire.Metal);
+        Assert.True(plan.Windings[0].Wire.OverallDiameterAssumed);
+        // The same assumed grade 1 build as the copper wire of that size (IEC 60317-0-1 via EnamelBuild).
+        Assert.Equal(plan.Windings[1].Wire.ElementOverallDiameter, plan.Windings[0].Wire.ElementOverallDiameter);
+    }
+
     [Theory]
     [InlineData("""{ "metricMm": 0.51 }""", "windings[0].wire.metricMm")]
     [InlineData("""{ "metricMm": 0.5, "grade": 4 }""", "windings[0].wire.grade")]

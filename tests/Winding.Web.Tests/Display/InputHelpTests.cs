@@ -59,6 +59,14 @@ public sealed class InputHelpTests : WindingComponentTestBase
     [InlineData("edit-legWidth")]
     [InlineData("edit-legDepth")]
     [InlineData("edit-bobbinWall")]
+    [InlineData("windings-0-metric-size")]
+    [InlineData("windings-0-litz-strand")]
+    [InlineData("windings-0-litz-bundle")]
+    [InlineData("windings-0-hookup-conductor")]
+    [InlineData("windings-0-hookup-insulation")]
+    [InlineData("core-outerDiameter")]
+    [InlineData("core-residualGap")]
+    [InlineData("core-effective-length")]
     public void LengthField_Help_NamesTheUnitsItTakes(string id)
     {
         var help = InputHelp.For(id);

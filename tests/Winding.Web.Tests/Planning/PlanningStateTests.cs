@@ -118,14 +118,14 @@ public sealed class PlanningStateTests : WindingComponentTestBase
     }
 
     [Fact]
-    public void Load_DemoPlan_KeepsWhatTheFormDoesNotEdit()
+    public void Load_DemoPlan_EditsItsHookUpWireInPlace()
     {
         var demo = DemoPlans.Find("club-current-sense")!;
 
         State.Load(demo.Document);
 
         Assert.Equal("Club current-sense transformer, 100 kHz converter", State.PlanName);
-        Assert.NotNull(State.Windings[0].ImportedWire?.HookUp);
+        Assert.Equal(WireForm.HookUp, State.Windings[0].WireForm);
         Assert.NotNull(State.Result);
         Assert.Equal(Winding.Core.Wire.WireKind.HookUp, State.Plan!.Windings[0].Wire.Kind);
     }

@@ -1,5 +1,4 @@
 using Microsoft.AspNetCore.Components;
-using Winding.Catalogue.Entries;
 using Winding.Web.Planning;
 
 namespace Winding.Web.Components.Pages;
@@ -80,6 +79,4 @@ public sealed partial class PlanPage
     public void Dispose() => State.Changed -= OnStateChanged;
 
     private void OnStateChanged() => _ = InvokeAsync(StateHasChanged);
-
-    private static string CoreLabel(CatalogueCore core) => $"{core.Name} · {core.Material.Name}";
 }
