@@ -60,6 +60,29 @@ public sealed partial class SheetFlowTests : IClassFixture<ServerFixture>
     }
 
     [SkippableFact]
+    public async Task EveryDemoSheet_PrintsOnOneOrTwoPages_OfA4AndLetter()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        foreach (var demo in Winding.Web.Planning.DemoPlans.All)
+        {
+            var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/sheet?demo=" + demo.Id));
+            await Assertions.Expect(page.GetByTestId("sheet-title")).ToHaveTextAsync(demo.Name);
+            foreach (var (paper, button) in new[] { ("a4", "paper-a4"), ("letter", "paper-letter") })
+            {
+                await page.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Screen });
+                await page.GetByTestId(button).ClickAsync();
+                await Assertions.Expect(page.GetByTestId("bench-sheet")).ToHaveAttributeAsync("data-paper", paper);
+                await page.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Print });
+                var pdf = await page.PdfAsync(new PagePdfOptions { PreferCSSPageSize = true, PrintBackground = true });
+                var pages = PageObject().Count(Encoding.Latin1.GetString(pdf));
+                Assert.True(pages is >= 1 and <= 2, $"{demo.Id} on {paper}: {pages} pages");
+            }
+
+            await page.CloseAsync();
+        }
+    }
+
+    [SkippableFact]
     public async Task SavedPlan_BenchResults_FlagOneOutside_AndTheMeasuredAlBecomesAUserCore()
     {
         await using var session = await BrowserSession.StartAsync();
