@@ -292,7 +292,8 @@ public static class OperatingAnalysis
                 FrequencyText.Text($"Hot: about {point.HotTemperatureC:0} °C ({point.TemperatureRiseK:0} K rise from {point.TotalLossW:0.###} W). Above about {TouchTemperatureC:0} °C a surface burns to the touch; keep it guarded and ventilated.")));
         }
 
-        if (material.AlTolerance >= 0.2)
+        // A measured AL replaces the material's spread (the bench's own accuracy applies instead).
+        if (material.AlTolerance >= 0.2 && plan.Measured.Al is null)
         {
             warnings.Add(new PlanWarning(
                 WarningCodes.WideAlTolerance, WarningSeverity.Info, "core",

@@ -132,6 +132,25 @@ public sealed class OperatingAnalysisTests
         Assert.Equal(40 + result.Operating.TemperatureRiseK, result.Operating.HotTemperatureC, 12);
     }
 
+    [Fact]
+    public void WideAlTolerance_IsWarned_UnlessTheAlWasMeasured()
+    {
+        // ±25 % is a common AL tolerance of ferrite classes (common practice, no source); a measured AL replaces it.
+        var ring = ToroidCore.Create(Mm(10), Mm(5), Mm(4));
+        var plan = new TransformerPlan(
+            "test",
+            new PlanCore(ring, 1, Material()),
+            [WindingSpec.Create("primary", 10, WindingWire.Solid(Mm(0.5), Mm(0.544))), WindingSpec.Create("secondary", 10, WindingWire.Solid(Mm(0.5), Mm(0.544)))],
+            Operating(1e6, 30e6, 1),
+            WireLengthAllowance.Default);
+
+        var estimated = PlanEvaluator.Evaluate(plan);
+        var measured = PlanEvaluator.Evaluate(plan with { Measured = new MeasuredValues(700e-9, null, null, []) });
+
+        Assert.Contains(estimated.Warnings, w => w.Code == WarningCodes.WideAlTolerance);
+        Assert.DoesNotContain(measured.Warnings, w => w.Code == WarningCodes.WideAlTolerance);
+    }
+
     private static PlanEvaluation Evaluate(CoreShape shape, MagneticMaterial material, int n1, int n2, OperatingConditions op, WindingWire? wire = null, double loadOhm = 50, double sourceOhm = 50)
     {
         wire ??= WindingWire.Solid(Mm(0.5), Mm(0.544));
