@@ -18,13 +18,21 @@ public sealed record PlanCore(CoreShape Shape, int StackCount, MagneticMaterial 
 
     /// <summary>
     /// Effective relative permeability of the wound core: μi for an ungapped core; with an air gap g in the path
-    /// μe = μi / (1 + μi·g/le) (gapped-core formula, Snelling 1988, ch. 2; valid for a small gap, g ≪ le).
+    /// μe = μi / (1 + μi·g/le) (gapped-core formula, Snelling 1988, ch. 2; valid for a small gap, g ≪ le). With a
+    /// measured AL, or an entered AL of a bobbin core, μe = AL·C1/μ0 (IEC 60205 AL = μ0·μe/C1), which already holds any
+    /// gap.
     /// </summary>
     public double EffectivePermeability
     {
         get
         {
             var shape = WoundGeometry;
+            var known = MeasuredAl ?? (shape is BobbinCore { EnteredAl: { } entered } ? entered : null);
+            if (known is { } al)
+            {
+                return al.HenriesPerTurnSquared * shape.EffectiveParameters().CoreFactorC1PerM / PhysicalConstants.VacuumPermeabilityHPerM;
+            }
+
             var mu = Material.InitialPermeability;
             var gapM = shape.GapLengthM;
             return gapM > 0 ? mu / (1 + mu * gapM / shape.EffectiveParameters().EffectiveLengthM) : mu;
