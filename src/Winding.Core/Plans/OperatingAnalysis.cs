@@ -316,9 +316,12 @@ public static class OperatingAnalysis
         var powerW = op.DriveVoltageRms * op.DriveVoltageRms / Math.Max(branch.ImpedanceSeenOhm, 1e-9);
         if (powerW > HighPowerW && op.MaxFrequencyHz >= 100e3)
         {
-            warnings.Add(new PlanWarning(
-                WarningCodes.HighPower, WarningSeverity.Caution, "operating.driveVoltageRms",
-                FrequencyText.Text($"About {powerW:0} W of RF passes through this transformer: RF burns are possible and exposure limits apply near antennas. Follow your licence conditions and local rules.")));
+            // A sine at these frequencies is a radio signal (burns, exposure near antennas, licence conditions); a square
+            // or pulse drive is a switching converter, where the same power means stored energy and hot parts instead.
+            var message = op.Waveform.Shape == WaveformShape.Sine
+                ? FrequencyText.Text($"About {powerW:0} W of RF passes through this transformer: RF burns are possible and exposure limits apply near antennas. Follow your licence conditions and local rules.")
+                : FrequencyText.Text($"About {powerW:0} W is switched through this transformer: keep the converter enclosed while it runs, let its capacitors discharge and its parts cool before touching them, and follow the safety standard of the equipment and your local codes.");
+            warnings.Add(new PlanWarning(WarningCodes.HighPower, WarningSeverity.Caution, "operating.driveVoltageRms", message));
         }
     }
 

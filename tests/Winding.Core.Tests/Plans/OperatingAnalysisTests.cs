@@ -151,6 +151,22 @@ public sealed class OperatingAnalysisTests
         Assert.DoesNotContain(measured.Warnings, w => w.Code == WarningCodes.WideAlTolerance);
     }
 
+    [Fact]
+    public void HighPower_SineSpeaksOfRf_SquareDriveOfASwitchingConverter()
+    {
+        // 40 V RMS against the 50 Ω the primary sees (2·(50 ∥ 50)) is 32 W, above the 10 W caution level (common practice,
+        // no source). A sine at 1.8–30 MHz is RF; the same power as a square drive is a converter's.
+        var ring = ToroidCore.Create(Mm(36), Mm(23), Mm(15));
+        var sine = Evaluate(ring, Material(), 10, 10, Operating(1.8e6, 30e6, 40));
+        var square = Evaluate(ring, Material(), 10, 10, Operating(1.8e6, 30e6, 40) with { Waveform = VoltageWaveform.Square });
+
+        var rf = Assert.Single(sine.Warnings, w => w.Code == WarningCodes.HighPower);
+        var switched = Assert.Single(square.Warnings, w => w.Code == WarningCodes.HighPower);
+        Assert.Contains("RF burns", rf.Message, StringComparison.Ordinal);
+        Assert.DoesNotContain("RF", switched.Message, StringComparison.Ordinal);
+        Assert.Contains("switched", switched.Message, StringComparison.Ordinal);
+    }
+
     private static PlanEvaluation Evaluate(CoreShape shape, MagneticMaterial material, int n1, int n2, OperatingConditions op, WindingWire? wire = null, double loadOhm = 50, double sourceOhm = 50)
     {
         wire ??= WindingWire.Solid(Mm(0.5), Mm(0.544));
