@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Text.RegularExpressions;
 
 namespace Winding.Web.Display;
 
@@ -9,7 +10,7 @@ namespace Winding.Web.Display;
 /// tables), areas and volumes in in² and in³ to three significant figures, and lengths to cut in inches to 0.1 in with
 /// feet and inches beside them from 12 in on.
 /// </summary>
-public static class LengthFormat
+public static partial class LengthFormat
 {
     /// <summary>The symbol lengths are shown in: "mm" or "in".</summary>
     public static string Symbol(UnitSystem system) => system == UnitSystem.Imperial ? "in" : "mm";
@@ -108,6 +109,36 @@ public static class LengthFormat
     /// <summary>A plain number with a fixed count of decimals (invariant culture).</summary>
     public static string Fixed(double value, int decimals) =>
         value.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+
+    /// <summary>
+    /// The engine's prose (fit reasons, warnings, wire-suggestion reasons), which gives lengths as "33.81 mm" and areas
+    /// as "1.2 mm²", with each such figure written in <paramref name="system"/>: metric leaves the text as it is;
+    /// imperial writes lengths under 1 mm as wire sizes (0.0001 in), longer ones as dimensions (0.001 in), areas in in².
+    /// Other units (A/mm², mm⁻¹) are left alone.
+    /// </summary>
+    public static string Prose(string text, UnitSystem system)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        if (system != UnitSystem.Imperial)
+        {
+            return text;
+        }
+
+        return MillimetreFigure().Replace(text, m =>
+        {
+            var value = double.Parse(m.Groups["value"].Value, CultureInfo.InvariantCulture);
+            if (m.Groups["square"].Success)
+            {
+                return Area(value, system, 0);
+            }
+
+            return value < 1 ? WireSize(value, system) : Dimension(value, system, 0);
+        });
+    }
+
+    /// <summary>A number followed by " mm" or " mm²" that is not part of another unit.</summary>
+    [GeneratedRegex(@"(?<![\w.,])(?<value>\d+(?:\.\d+)?) mm(?<square>²)?(?![\w²³⁻/])", RegexOptions.CultureInvariant)]
+    private static partial Regex MillimetreFigure();
 
     /// <summary>A number to <paramref name="digits"/> significant figures, never in exponent form.</summary>
     public static string Significant(double value, int digits)

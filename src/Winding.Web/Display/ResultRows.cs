@@ -55,7 +55,7 @@ public static class ResultRows
         var rows = new List<ResultRow>
         {
             new(key + "inductance", "Inductance L", EngineeringFormat.Format(w.InductanceH, "H"), "L = AL·N² at low excitation and low frequency."),
-            new(key + "fits", "Fit", OutcomeText(w.Fit.Outcome) + " — " + w.Fit.Reason, "Whether every turn finds room, and how comfortably: " + w.Fit.Method + "."),
+            new(key + "fits", "Fit", OutcomeText(w.Fit.Outcome) + " — " + LengthFormat.Prose(w.Fit.Reason, units), "Whether every turn finds room, and how comfortably: " + w.Fit.Method + "."),
             new(key + "turns-per-layer", "Turns per layer", w.Fit.TurnsPerLayer.Count == 0 ? "—" : string.Join(" + ", w.Fit.TurnsPerLayer.Select(t => t.ToString(CultureInfo.InvariantCulture))), "Turns in each layer, innermost first (common practice convention)."),
             new(key + "layers", "Layers", w.Fit.Layers.ToString(CultureInfo.InvariantCulture), "Layers used."),
         };

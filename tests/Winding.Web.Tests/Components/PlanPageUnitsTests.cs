@@ -41,6 +41,20 @@ public sealed class PlanPageUnitsTests : WindingComponentTestBase
     }
 
     [Fact]
+    public async Task PlanPage_SwitchToImperial_FitReasonsAndWarningsGiveNoMillimetres()
+    {
+        State.Load(DemoPlans.Find("club-end-fed-unun")!.Document);
+        var page = Render<PlanPage>();
+        Assert.Contains(" mm hole left", page.Find("[data-testid=value-w0-fits]").TextContent, StringComparison.Ordinal);
+
+        await SwitchTo(UnitSystem.Imperial);
+
+        page.WaitForAssertion(() => Assert.Contains(" in hole left", page.Find("[data-testid=value-w0-fits]").TextContent, StringComparison.Ordinal));
+        Assert.DoesNotContain(" mm", page.Find("[data-testid=warnings]").TextContent, StringComparison.Ordinal);
+        Assert.Contains(" in)", page.Find("[data-testid=warnings]").TextContent, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public async Task PlanPage_SwitchToImperial_ShowsResultsInInches()
     {
         var page = Render<PlanPage>();

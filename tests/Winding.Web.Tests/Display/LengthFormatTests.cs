@@ -76,4 +76,24 @@ public sealed class LengthFormatTests
         Assert.Equal("16387 in⁻³", LengthFormat.PerLength(1, 3, UnitSystem.Imperial, "0.#####"));
         Assert.Equal("1 mm⁻¹", LengthFormat.PerLength(1, 1, UnitSystem.Metric, "0.#####"));
     }
+
+    [Theory]
+    // 1 in = 25.4 mm exactly (NIST SP 811): 33.81 mm = 1.3311 in; 0.012 mm = 0.00047 in; 1.5 mm² = 0.002325 in².
+    [InlineData("1 layer, 33.81 mm hole left.", "1 layer, 1.331 in hole left.")]
+    [InlineData("(δ = 0.012 mm); above about 2", "(δ = 0.0005 in); above about 2")]
+    [InlineData("Copper 10 × 1.5 mm² = 15 mm², within", "Copper 10 × 0.00233 in² = 0.0233 in², within")]
+    [InlineData("above 4 A/mm² and 2.27 mm⁻¹ stay", "above 4 A/mm² and 2.27 mm⁻¹ stay")]
+    [InlineData("no lengths here", "no lengths here")]
+    public void Prose_Imperial_WritesEveryMillimetreFigureInInches(string engine, string shown)
+    {
+        Assert.Equal(shown, LengthFormat.Prose(engine, UnitSystem.Imperial));
+    }
+
+    [Fact]
+    public void Prose_Metric_LeavesTheEnginesTextAsItIs()
+    {
+        const string engine = "Only 0.45 mm of window height is left: 1.2 mm² of copper.";
+
+        Assert.Same(engine, LengthFormat.Prose(engine, UnitSystem.Metric));
+    }
 }
