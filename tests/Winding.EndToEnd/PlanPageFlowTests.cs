@@ -104,6 +104,23 @@ public sealed class PlanPageFlowTests : IClassFixture<ServerFixture>
         await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "plan-keyboard.png"), FullPage = true });
     }
 
+    [SkippableFact]
+    public async Task Warning_GoToTheField_FocusesTheFieldItIsAbout()
+    {
+        await using var session = await BrowserSession.StartAsync();
+        var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/plan?demo=club-end-fed-unun"));
+        await Assertions.Expect(page.GetByTestId("warnings")).ToBeVisibleAsync();
+        var link = page.Locator("[data-field^='windings[1]'] [data-testid=warning-target]").First;
+        var targets = (await link.GetAttributeAsync("data-targets"))!.Split(' ');
+
+        await link.ClickAsync();
+
+        await page.WaitForFunctionAsync("ids => ids.includes(document.activeElement?.id)", targets);
+        var focused = await page.EvaluateAsync<string>("() => document.activeElement.id");
+        Assert.StartsWith("windings-1-", focused, StringComparison.Ordinal);
+        await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "warning-go-to-field.png") });
+    }
+
     /// <summary>What the API answers for the same plan, formatted as the page formats it.</summary>
     private async Task<string> ExpectedInductance(int turns)
     {

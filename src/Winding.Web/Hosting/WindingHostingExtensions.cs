@@ -56,6 +56,7 @@ public static class WindingHostingExtensions
         services.AddTransient<SavedPlansModel>();
         services.AddScoped<Characterising.CharacterisationState>();
         services.AddScoped<Display.BrowserPreferences>();
+        services.AddScoped<Display.FieldFocus>();
         services.AddScoped<Display.DisplayUnits>();
         services.AddCascadingValue(sp => sp.GetRequiredService<Display.DisplayUnits>().Source);
         services.AddScoped<Sheets.SheetLoader>();
