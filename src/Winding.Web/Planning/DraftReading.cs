@@ -9,7 +9,7 @@ namespace Winding.Web.Planning;
 /// Numbers accept SI prefixes and a decimal comma (<see cref="EngineeringNumber"/>); lengths a unit
 /// (<see cref="LengthText"/>, plain numbers in mm).
 /// </summary>
-internal static class DraftReading
+public static class DraftReading
 {
     /// <summary>A number in <paramref name="unit"/>, or null (empty, or not a number: then an error at <paramref name="path"/>).</summary>
     public static double? Number(Dictionary<string, string> errors, string path, string text, string label, string unit, bool required)
@@ -111,6 +111,21 @@ internal static class DraftReading
 
     /// <summary>The draft text of a stored number: the shortest text that reads back as exactly the same value.</summary>
     public static string Show(double? value) => value?.ToString("R", CultureInfo.InvariantCulture) ?? string.Empty;
+
+    /// <summary>
+    /// The draft text of a stored value with a unit, in engineering notation when that reads back to exactly the stored
+    /// double ("3.5 MHz" for 3500000 Hz); otherwise the number's shortest round-trip text, so no digit is ever lost.
+    /// </summary>
+    public static string ShowWithUnit(double? value, string unit)
+    {
+        if (value is not { } v)
+        {
+            return string.Empty;
+        }
+
+        var readable = Winding.Web.Display.EngineeringFormat.Editable(v, unit).Replace(" u" + unit, " µ" + unit, StringComparison.Ordinal);
+        return Winding.Web.Display.EngineeringNumber.TryParse(readable, unit) == v ? readable : Show(v);
+    }
 
     /// <summary>The draft text of a stored whole number.</summary>
     public static string Show(int? value) => value?.ToString(CultureInfo.InvariantCulture) ?? string.Empty;

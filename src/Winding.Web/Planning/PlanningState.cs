@@ -462,8 +462,8 @@ public sealed class PlanningState
         if (document.Operating is { } op)
         {
             Operating.Enabled = true;
-            Operating.MinFrequency = DraftReading.Show(op.MinFrequencyHz);
-            Operating.MaxFrequency = DraftReading.Show(op.MaxFrequencyHz);
+            Operating.MinFrequency = DraftReading.ShowWithUnit(op.MinFrequencyHz, "Hz");
+            Operating.MaxFrequency = DraftReading.ShowWithUnit(op.MaxFrequencyHz, "Hz");
             Operating.SourceResistance = DraftReading.Show(op.SourceResistanceOhm);
             Operating.LoadResistance = DraftReading.Show(op.LoadResistanceOhm);
             Operating.DriveVoltage = DraftReading.Show(op.DriveVoltageRms);

@@ -48,7 +48,8 @@ public sealed class SweepCsvButtonTests : WindingComponentTestBase
 
         page.Find("[data-testid=export-sweep]").Click();
 
-        var call = Assert.Single(save.Invocations);
+        page.WaitForAssertion(() => Assert.Single(save.Invocations));
+        var call = save.Invocations[0];
         Assert.Equal("bench-19.csv", call.Arguments[0]);
         Assert.Equal(SweepCsv.Write(state.Result!.Response!.Sweep), call.Arguments[2]);
     }
