@@ -49,7 +49,7 @@ public sealed class SweepCsvButtonTests : WindingComponentTestBase
         page.Find("[data-testid=export-sweep]").Click();
 
         page.WaitForAssertion(() => Assert.Single(save.Invocations));
-        var call = save.Invocations[0];
+        var call = Assert.Single(save.Invocations);
         Assert.Equal("bench-19.csv", call.Arguments[0]);
         Assert.Equal(SweepCsv.Write(state.Result!.Response!.Sweep), call.Arguments[2]);
     }
