@@ -46,17 +46,24 @@ public sealed partial class SheetFlowTests : IClassFixture<ServerFixture>
         await page.ScreenshotAsync(new PageScreenshotOptions { Path = Path.Combine(ServerFixture.ArtefactDirectory, "bench-sheet-print.png"), FullPage = true });
 
         // The issue asks for one or two pages: print it as the browser would, on both papers, and count the pages.
-        foreach (var (paper, button) in new[] { ("a4", "paper-a4"), ("letter", "paper-letter") })
+        foreach (var paper in Papers)
         {
-            await page.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Screen });
-            await page.GetByTestId(button).ClickAsync();
-            await Assertions.Expect(page.GetByTestId("bench-sheet")).ToHaveAttributeAsync("data-paper", paper);
-            await page.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Print });
-            var pdf = await page.PdfAsync(new PagePdfOptions { PreferCSSPageSize = true, PrintBackground = true });
+            var pdf = await PrintAsync(page, paper);
             File.WriteAllBytes(Path.Combine(ServerFixture.ArtefactDirectory, $"bench-sheet-{paper}.pdf"), pdf);
-            var pages = PageObject().Count(Encoding.Latin1.GetString(pdf));
-            Assert.InRange(pages, 1, 2);
+            Assert.InRange(PageObject().Count(Encoding.Latin1.GetString(pdf)), 1, 2);
         }
+    }
+
+    private static readonly string[] Papers = ["a4", "letter"];
+
+    /// <summary>Chooses <paramref name="paper"/> on the sheet page and prints it as the browser would (print media, CSS page size).</summary>
+    private static async Task<byte[]> PrintAsync(IPage page, string paper)
+    {
+        await page.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Screen });
+        await page.GetByTestId("paper-" + paper).ClickAsync();
+        await Assertions.Expect(page.GetByTestId("bench-sheet")).ToHaveAttributeAsync("data-paper", paper);
+        await page.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Print });
+        return await page.PdfAsync(new PagePdfOptions { PreferCSSPageSize = true, PrintBackground = true });
     }
 
     [SkippableFact]
@@ -67,14 +74,9 @@ public sealed partial class SheetFlowTests : IClassFixture<ServerFixture>
         {
             var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/sheet?demo=" + demo.Id));
             await Assertions.Expect(page.GetByTestId("sheet-title")).ToHaveTextAsync(demo.Name);
-            foreach (var (paper, button) in new[] { ("a4", "paper-a4"), ("letter", "paper-letter") })
+            foreach (var paper in Papers)
             {
-                await page.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Screen });
-                await page.GetByTestId(button).ClickAsync();
-                await Assertions.Expect(page.GetByTestId("bench-sheet")).ToHaveAttributeAsync("data-paper", paper);
-                await page.EmulateMediaAsync(new PageEmulateMediaOptions { Media = Media.Print });
-                var pdf = await page.PdfAsync(new PagePdfOptions { PreferCSSPageSize = true, PrintBackground = true });
-                var pages = PageObject().Count(Encoding.Latin1.GetString(pdf));
+                var pages = PageObject().Count(Encoding.Latin1.GetString(await PrintAsync(page, paper)));
                 Assert.True(pages is >= 1 and <= 2, $"{demo.Id} on {paper}: {pages} pages");
             }
 

@@ -12,60 +12,17 @@ public sealed class BrowserPreferences : IAsyncDisposable
     /// <summary>The module path, relative to the app's base address.</summary>
     public const string ModulePath = "./js/preferences.js";
 
-    private readonly IJSRuntime _js;
-    private IJSObjectReference? _module;
+    private readonly BrowserModule _module;
 
     /// <summary>Creates the store for one circuit.</summary>
-    public BrowserPreferences(IJSRuntime js)
-    {
-        ArgumentNullException.ThrowIfNull(js);
-        _js = js;
-    }
+    public BrowserPreferences(IJSRuntime js) => _module = new BrowserModule(js, ModulePath);
 
     /// <summary>The stored text of <paramref name="key"/>, or null when there is none or no storage to read.</summary>
-    public async Task<string?> ReadAsync(string key)
-    {
-        try
-        {
-            _module ??= await _js.InvokeAsync<IJSObjectReference>("import", ModulePath);
-            return await _module.InvokeAsync<string?>("read", key);
-        }
-        catch (Exception e) when (IsUnavailable(e))
-        {
-            return null;
-        }
-    }
+    public Task<string?> ReadAsync(string key) => _module.InvokeAsync<string?>("read", key);
 
     /// <summary>Stores <paramref name="value"/> under <paramref name="key"/>; without storage nothing happens.</summary>
-    public async Task WriteAsync(string key, string value)
-    {
-        try
-        {
-            _module ??= await _js.InvokeAsync<IJSObjectReference>("import", ModulePath);
-            await _module.InvokeVoidAsync("write", key, value);
-        }
-        catch (Exception e) when (IsUnavailable(e))
-        {
-            // Not stored: the choice lasts for this visit.
-        }
-    }
+    public Task WriteAsync(string key, string value) => _module.InvokeVoidAsync("write", key, value);
 
     /// <inheritdoc />
-    public async ValueTask DisposeAsync()
-    {
-        if (_module is not null)
-        {
-            try
-            {
-                await _module.DisposeAsync();
-            }
-            catch (JSDisconnectedException)
-            {
-                // The circuit is gone; so is the module.
-            }
-        }
-    }
-
-    private static bool IsUnavailable(Exception e) =>
-        e is JSException or JSDisconnectedException or InvalidOperationException or TaskCanceledException;
+    public ValueTask DisposeAsync() => _module.DisposeAsync();
 }

@@ -11,49 +11,18 @@ public sealed class FieldFocus : IAsyncDisposable
     /// <summary>The module path, relative to the app's base address.</summary>
     public const string ModulePath = "./js/focus.js";
 
-    private readonly IJSRuntime _js;
-    private IJSObjectReference? _module;
+    private readonly BrowserModule _module;
 
     /// <summary>Creates the service for one circuit.</summary>
-    public FieldFocus(IJSRuntime js)
-    {
-        ArgumentNullException.ThrowIfNull(js);
-        _js = js;
-    }
+    public FieldFocus(IJSRuntime js) => _module = new BrowserModule(js, ModulePath);
 
     /// <summary>Focuses the first of <paramref name="ids"/> that is on the page; returns its id, or null when none is.</summary>
-    public async Task<string?> FocusFirstAsync(IReadOnlyList<string> ids)
+    public Task<string?> FocusFirstAsync(IReadOnlyList<string> ids)
     {
         ArgumentNullException.ThrowIfNull(ids);
-        if (ids.Count == 0)
-        {
-            return null;
-        }
-
-        try
-        {
-            _module ??= await _js.InvokeAsync<IJSObjectReference>("import", ModulePath);
-            return await _module.InvokeAsync<string?>("focusFirst", ids);
-        }
-        catch (Exception e) when (e is JSException or JSDisconnectedException or InvalidOperationException or TaskCanceledException)
-        {
-            return null;
-        }
+        return ids.Count == 0 ? Task.FromResult<string?>(null) : _module.InvokeAsync<string?>("focusFirst", ids);
     }
 
     /// <inheritdoc />
-    public async ValueTask DisposeAsync()
-    {
-        if (_module is not null)
-        {
-            try
-            {
-                await _module.DisposeAsync();
-            }
-            catch (JSDisconnectedException)
-            {
-                // The circuit is gone; so is the module.
-            }
-        }
-    }
+    public ValueTask DisposeAsync() => _module.DisposeAsync();
 }
