@@ -14,11 +14,14 @@ public static class DemoPlans
 
     private static readonly Lazy<IReadOnlyList<DemoPlan>> Loaded = new(Load);
 
-    /// <summary>All demo plans, in name order.</summary>
-    public static IReadOnlyList<DemoPlan> All => Loaded.Value;
+    /// <summary>All demo plans, in name order; each call hands out its own copies, so no caller can change a demo for another.</summary>
+    public static IReadOnlyList<DemoPlan> All => [.. Loaded.Value.Select(Copy)];
 
-    /// <summary>The demo plan with <paramref name="id"/>, or null.</summary>
-    public static DemoPlan? Find(string? id) => All.FirstOrDefault(d => d.Id == id);
+    /// <summary>The demo plan with <paramref name="id"/> (a copy of its own), or null.</summary>
+    public static DemoPlan? Find(string? id) => Loaded.Value.FirstOrDefault(d => d.Id == id) is { } demo ? Copy(demo) : null;
+
+    private static DemoPlan Copy(DemoPlan demo) =>
+        demo with { Document = JsonSerializer.Deserialize<PlanDocument>(JsonSerializer.SerializeToUtf8Bytes(demo.Document, CatalogueJson.Options), CatalogueJson.Options)! };
 
     private static List<DemoPlan> Load()
     {
