@@ -20,8 +20,28 @@ function hertz(value, digits) {
     return `${Number((value / scale).toPrecision(digits))} ${prefix}Hz`;
 }
 
-// The chart's text colour follows the page (light or dark theme).
-const textColour = u => getComputedStyle(u.root).color || "#444";
+// The chart's text colour follows the page (light or dark theme); black on paper.
+let printing = false;
+const textColour = u => printing ? "#000" : getComputedStyle(u.root).color || "#444";
+
+// Every chart on the page, to redraw them for printing.
+const charts = new Set();
+
+function redrawAll() {
+    for (const state of charts) {
+        state.plot?.redraw(false, false);
+    }
+}
+
+function watchPrinting() {
+    if (watchPrinting.done || typeof window === "undefined") {
+        return;
+    }
+
+    watchPrinting.done = true;
+    window.addEventListener("beforeprint", () => { printing = true; redrawAll(); });
+    window.addEventListener("afterprint", () => { printing = false; redrawAll(); });
+}
 
 // Range that starts at zero when all values are on one side of it, with a little room above.
 function toZero(u, min, max) {
@@ -110,7 +130,8 @@ function options(element, state, spec) {
         width: Math.max(element.clientWidth, 200),
         height: HEIGHT,
         scales: {
-            x: { time: false, distr: 3, log: 10 },
+            // Log frequency axis over exactly the plotted frequencies.
+            x: { time: false, distr: 3, log: 10, range: (u, min, max) => [min, max] },
             il: { range: toZero },
             rl: { range: toZero },
         },
@@ -173,6 +194,16 @@ export function create(element, plot) {
     if (!state) {
         state = { plot: null, spec: null, key: null, draws: 0, observer: null, width: element.clientWidth };
         element._windingChartState = state;
+        charts.add(state);
+        watchPrinting();
+        // A theme switch changes the container's text colour; its (1 ms) colour transition tells us to redraw the
+        // axes, which are painted on the canvas (app.css).
+        state.onColour = e => {
+            if (e.target === element && e.propertyName === "color") {
+                state.plot?.redraw(false, false);
+            }
+        };
+        element.addEventListener("transitionend", state.onColour);
         if (typeof ResizeObserver === "function") {
             state.observer = new ResizeObserver(() => {
                 const width = Math.max(element.clientWidth, 200);
@@ -213,6 +244,8 @@ export function dispose(element) {
         return;
     }
 
+    charts.delete(state);
+    element.removeEventListener("transitionend", state.onColour);
     state.observer?.disconnect();
     state.plot?.destroy();
     delete element._windingChartState;
