@@ -20,6 +20,25 @@ function hertz(value, digits) {
     return `${Number((value / scale).toPrecision(digits))} ${prefix}Hz`;
 }
 
+// Log-axis ticks: 1…9 × each power of ten within the range (uPlot's log filter then labels 1, 2, 5… as room allows).
+function decadeSplits(u, axisIdx, min, max) {
+    const splits = [];
+    if (!(min > 0) || !(max > min)) {
+        return splits;
+    }
+
+    for (let e = Math.floor(Math.log10(min)); e <= Math.ceil(Math.log10(max)); e++) {
+        for (let m = 1; m < 10; m++) {
+            const v = Number((m * 10 ** e).toPrecision(12));
+            if (v >= min * (1 - 1e-9) && v <= max * (1 + 1e-9)) {
+                splits.push(v);
+            }
+        }
+    }
+
+    return splits;
+}
+
 // The chart's text colour follows the page (light or dark theme); black on paper.
 let printing = false;
 const textColour = u => printing ? "#000" : getComputedStyle(u.root).color || "#444";
@@ -142,6 +161,7 @@ function options(element, state, spec) {
                 stroke: textColour,
                 grid: { stroke: GRID, width: 1 },
                 ticks: { stroke: GRID, width: 1 },
+                splits: decadeSplits,
                 values: (u, splits) => splits.map(v => v == null ? null : hertz(v, 3)),
             },
             valueAxis("il", spec.leftTitle, 3, true),
