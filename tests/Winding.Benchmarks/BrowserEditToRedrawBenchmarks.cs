@@ -11,9 +11,9 @@ namespace Winding.Benchmarks;
 /// data folder) and Debian's Chromium. One benchmark invocation types a new primary turn count into the plan page of the
 /// end-fed demo (401-point response) and commits it (the field's change event, as Enter or leaving the field does, so
 /// the typing debounce is not part of the figure), then waits in the browser until the results panel shows the new
-/// evaluation and the response chart has been drawn again (Plotly's
-/// plotly_afterplot event on the existing figure, or a new figure), and the next paint (a task queued from the next
-/// animation frame).
+/// evaluation and the response chart has been drawn again (the chart module's <c>winding-chart-drawn</c> event, which
+/// also raises the container's <c>data-drawn</c> counter), and the next paint (a task queued from the next animation
+/// frame).
 /// Runs in process (Playwright's driver sits beside this assembly). Needs /usr/bin/chromium (or WINDING_CHROMIUM).
 /// </summary>
 [InProcess]
@@ -26,11 +26,13 @@ public class BrowserEditToRedrawBenchmarks : IDisposable
         async ([id, value]) => {
           const input = document.getElementById(id);
           const results = document.querySelector('[data-testid=results]');
-          const chart = () => document.querySelector('[data-testid=response-chart] .js-plotly-plot');
+          const chart = document.querySelector('[data-testid=response-chart]');
           const before = results.dataset.evaluation;
-          const oldPlot = chart();
-          let redrawn = false;
-          if (oldPlot && oldPlot.once) { oldPlot.once('plotly_afterplot', () => { redrawn = true; }); }
+          const drawsBefore = chart.getAttribute('data-drawn');
+          const redrawn = new Promise((resolve, reject) => {
+            chart.addEventListener('winding-chart-drawn', () => resolve(), { once: true });
+            setTimeout(() => reject(new Error('the chart was not redrawn')), 5000);
+          });
           const t0 = performance.now();
           const shown = new Promise(resolve => {
             const observer = new MutationObserver(() => {
@@ -45,13 +47,8 @@ public class BrowserEditToRedrawBenchmarks : IDisposable
           input.blur();
           await shown;
           const tShown = performance.now() - t0;
-          const deadline = performance.now() + 5000;
-          while (true) {
-            const plot = chart();
-            if (redrawn || (plot && plot !== oldPlot && plot._fullLayout)) break;
-            if (performance.now() > deadline) throw new Error('the chart was not redrawn');
-            await new Promise(r => requestAnimationFrame(r));
-          }
+          await redrawn;
+          if (chart.getAttribute('data-drawn') === drawsBefore) throw new Error('data-drawn did not change');
           // The next paint: a task queued from the next animation frame runs once that frame has been painted.
           await new Promise(r => requestAnimationFrame(() => setTimeout(r, 0)));
           return [tShown, performance.now() - t0];
@@ -135,7 +132,7 @@ public class BrowserEditToRedrawBenchmarks : IDisposable
         _page = await _browser.NewPageAsync(new BrowserNewPageOptions { ViewportSize = new ViewportSize { Width = 1280, Height = 900 } });
         await _page.GotoAsync(new Uri(address, "plan?demo=club-end-fed-unun").ToString());
         await _page.Locator("#app-content[data-interactive=true]").WaitForAsync(new LocatorWaitForOptions { Timeout = 30_000 });
-        await _page.Locator("[data-testid=response-chart] .js-plotly-plot").WaitForAsync(new LocatorWaitForOptions { Timeout = 30_000 });
+        await _page.Locator("[data-testid=response-chart][data-drawn]").WaitForAsync(new LocatorWaitForOptions { Timeout = 30_000 });
         _turns = int.Parse(await _page.Locator("#windings-0-turns").InputValueAsync(), System.Globalization.CultureInfo.InvariantCulture);
     }
 

@@ -43,9 +43,10 @@ public sealed class ScreenMatchesApiTests : IClassFixture<ServerFixture>
         await using var session = await BrowserSession.StartAsync();
         var page = await session.OpenInteractiveAsync(new Uri(_server.BaseAddress, "/plan?demo=club-end-fed-unun"));
         await Assertions.Expect(page.Locator("[data-testid=value-w0-inductance]")).ToBeVisibleAsync();
-        var chart = page.Locator("[data-testid=response-chart] .js-plotly-plot");
-        await Assertions.Expect(chart).ToBeVisibleAsync();
-        var before = await chart.EvaluateAsync<double>("gd => gd.data[0].y[0]");
+        var chart = page.Locator("[data-testid=response-chart]");
+        await Assertions.Expect(chart.Locator("canvas")).ToBeVisibleAsync();
+        await page.WaitForFunctionAsync("() => document.querySelector('[data-testid=response-chart]').windingChart !== undefined");
+        var before = await chart.EvaluateAsync<double>("el => el.windingChart.series[0].values[0]");
 
         // Same 1:9 ratio, more turns: the chart's low end must move (more magnetising reactance).
         await page.Locator("#windings-0-turns").FillAsync("6");
@@ -53,7 +54,7 @@ public sealed class ScreenMatchesApiTests : IClassFixture<ServerFixture>
         await page.Locator("#windings-1-turns").FillAsync("18");
         await page.Locator("#windings-1-turns").BlurAsync();
         await Assertions.Expect(page.Locator("[data-testid=value-w1-turns-per-layer]")).ToHaveTextAsync("18");
-        await page.WaitForFunctionAsync("before => document.querySelector('[data-testid=response-chart] .js-plotly-plot').data[0].y[0] !== before", before);
+        await page.WaitForFunctionAsync("before => document.querySelector('[data-testid=response-chart]').windingChart.series[0].values[0] !== before", before);
 
         var demo = DemoPlans.Find("club-end-fed-unun")!;
         var edited = JsonSerializer.SerializeToNode(demo.Document, CatalogueJson.Options)!;
@@ -96,9 +97,12 @@ public sealed class ScreenMatchesApiTests : IClassFixture<ServerFixture>
 
         if (json.RootElement.TryGetProperty("sweep", out var sweep) && sweep.ValueKind == JsonValueKind.Array)
         {
-            // The plan's own traces are the chart's first two: insertion loss and return loss at the sweep's frequencies.
-            var traces = await page.Locator("[data-testid=response-chart] .js-plotly-plot").EvaluateAsync<double[][]>(
-                "gd => [gd.data[0].x, gd.data[0].y, gd.data[1].y].map(a => Array.from(a, Number))");
+            // The plan's own series are the chart's first two: insertion loss and return loss at the sweep's frequencies
+            // (as plotted: the values the chart module handed to uPlot).
+            var chart = page.Locator("[data-testid=response-chart]");
+            await page.WaitForFunctionAsync("() => document.querySelector('[data-testid=response-chart]').windingChart !== undefined");
+            var traces = await chart.EvaluateAsync<double[][]>(
+                "el => [el.windingChart.x, el.windingChart.series[0].values, el.windingChart.series[1].values].map(a => Array.from(a, Number))");
             var points = sweep.EnumerateArray().ToArray();
             Assert.Equal(points.Length, traces[0].Length);
             for (var i = 0; i < points.Length; i++)

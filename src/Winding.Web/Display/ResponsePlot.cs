@@ -1,36 +1,70 @@
-using Plotly.Blazor;
-using Plotly.Blazor.LayoutLib;
-using Plotly.Blazor.Traces;
+using System.Text.Json;
+using System.Text.Json.Serialization;
 using Winding.Core.Plans;
+using Winding.Core.Response;
 
 namespace Winding.Web.Display;
 
 /// <summary>
-/// The frequency-response plot of one or more responses, as Plotly traces and layout: insertion loss (left axis, plain:
-/// larger loss higher up) and return loss (right axis, dashed) against a log frequency axis; the requested band shaded
-/// lightly; the 1 dB (dotted) and 3 dB (dashed) edges of the first response as vertical lines; the spread of its 3 dB
-/// edges over the AL and capacitance tolerance shaded. Hovering reads out the frequency and every trace's value there.
+/// The frequency-response plot of one or more responses, independent of any chart library: insertion loss (left axis,
+/// plain: larger loss higher up) and return loss (right axis, dashed) against a log frequency axis; the requested band
+/// shaded lightly; the 1 dB (dotted) and 3 dB (dashed) edges of the first response as vertical lines; the spread of its
+/// 3 dB edges over the AL and capacitance tolerance shaded. <see cref="ToJson"/> is what the browser module
+/// <c>wwwroot/js/response-chart.js</c> draws.
 /// </summary>
 public sealed class ResponsePlot
 {
     /// <summary>Line colours, one per response (the first is the plan).</summary>
     private static readonly string[] Palette = ["#1565c0", "#c62828", "#2e7d32", "#6a1b9a", "#ef6c00", "#00838f"];
 
-    private ResponsePlot(IList<ITrace> data, Layout layout, Config config)
+    /// <summary>Colour of the edge lines and their labels (readable on light and dark backgrounds).</summary>
+    private const string EdgeColour = "#808080";
+
+    private static readonly JsonSerializerOptions JsonOptions = new(JsonSerializerDefaults.Web)
     {
-        Data = data;
-        Layout = layout;
-        Config = config;
+        Converters = { new JsonStringEnumConverter(JsonNamingPolicy.CamelCase) },
+    };
+
+    private ResponsePlot(
+        IReadOnlyList<double> frequenciesHz,
+        IReadOnlyList<PlotSeries> series,
+        PlotSpan band,
+        IReadOnlyList<PlotSpan> spreads,
+        IReadOnlyList<PlotEdge> edges)
+    {
+        FrequenciesHz = frequenciesHz;
+        Series = series;
+        Band = band;
+        Spreads = spreads;
+        Edges = edges;
     }
 
-    /// <summary>The traces: per response, insertion loss then return loss.</summary>
-    public IList<ITrace> Data { get; }
+    /// <summary>The frequencies, Hz, ascending: every response's sweep frequencies (one list when they agree).</summary>
+    public IReadOnlyList<double> FrequenciesHz { get; }
 
-    /// <summary>The layout: axes, shaded band, edge lines and tolerance spread.</summary>
-    public Layout Layout { get; }
+    /// <summary>The lines: per response, insertion loss then return loss.</summary>
+    public IReadOnlyList<PlotSeries> Series { get; }
 
-    /// <summary>The chart configuration (responsive, no logo).</summary>
-    public Config Config { get; }
+    /// <summary>The requested band, shaded.</summary>
+    public PlotSpan Band { get; }
+
+    /// <summary>The spread of the first response's 3 dB edges over the tolerance, shaded (none, one or two ranges).</summary>
+    public IReadOnlyList<PlotSpan> Spreads { get; }
+
+    /// <summary>The first response's 1 dB and 3 dB edges that lie within its sweep.</summary>
+    public IReadOnlyList<PlotEdge> Edges { get; }
+
+    /// <summary>Title of the frequency axis.</summary>
+    public string FrequencyTitle => "frequency";
+
+    /// <summary>Title of the left axis.</summary>
+    public string LeftTitle => "insertion loss (dB)";
+
+    /// <summary>Title of the right axis.</summary>
+    public string RightTitle => "return loss (dB)";
+
+    /// <summary>The plot as one compact JSON object (camelCase names; enum values as camelCase strings; null for a missing value).</summary>
+    public string ToJson() => JsonSerializer.Serialize(this, JsonOptions);
 
     /// <summary>Builds the plot.</summary>
     /// <param name="responses">Named responses; the first is the plan, its edges and tolerance are marked; at least one.</param>
@@ -54,127 +88,114 @@ public sealed class ResponsePlot
             throw new ArgumentOutOfRangeException(nameof(maxFrequencyHz), maxFrequencyHz, "Must be finite and above minFrequencyHz.");
         }
 
-        var data = new List<ITrace>();
+        foreach (var (_, response) in responses)
+        {
+            ArgumentNullException.ThrowIfNull(response);
+        }
+
+        var (frequencies, shared) = Frequencies(responses);
+        var series = new List<PlotSeries>();
         for (var i = 0; i < responses.Count; i++)
         {
             var (name, response) = responses[i];
-            ArgumentNullException.ThrowIfNull(response);
             var colour = Palette[i % Palette.Length];
-            var frequencies = response.Sweep.Select(p => (object)p.FrequencyHz).ToList();
-            data.Add(new Scatter
-            {
-                Name = $"{name} · insertion loss",
-                Mode = Plotly.Blazor.Traces.ScatterLib.ModeFlag.Lines,
-                X = frequencies,
-                Y = response.Sweep.Select(p => (object)p.InsertionLossDb).ToList(),
-                Line = new Plotly.Blazor.Traces.ScatterLib.Line { Color = colour, Width = 2 },
-                HoverTemplate = "IL %{y:.2f} dB",
-            });
-            data.Add(new Scatter
-            {
-                Name = $"{name} · return loss",
-                Mode = Plotly.Blazor.Traces.ScatterLib.ModeFlag.Lines,
-                X = frequencies,
-                Y = response.Sweep.Select(p => (object)p.ReturnLossDb).ToList(),
-                YAxis = "y2",
-                Line = new Plotly.Blazor.Traces.ScatterLib.Line { Color = colour, Width = 1.5m, Dash = "dash" },
-                HoverTemplate = "RL %{y:.1f} dB",
-            });
+            var insertion = Align(response, frequencies, shared, p => p.InsertionLossDb);
+            var returnLoss = Align(response, frequencies, shared, p => p.ReturnLossDb);
+            series.Add(new PlotSeries($"{name} · insertion loss", colour, 2, LineDash.Solid, PlotAxis.Left, "dB", 2, !shared, insertion));
+            series.Add(new PlotSeries($"{name} · return loss", colour, 1.5, LineDash.Dash, PlotAxis.Right, "dB", 1, !shared, returnLoss));
         }
 
         var plan = responses[0].Response;
-        var shapes = new List<Shape> { Span(minFrequencyHz, maxFrequencyHz, "rgba(46, 125, 50, 0.10)", "requested band") };
+        var band = new PlotSpan(minFrequencyHz, maxFrequencyHz, "rgba(46, 125, 50, 0.10)", "requested band");
+        var spreads = new List<PlotSpan>();
         var spread = plan.Tolerance;
         if (spread.LowerCutoffMinHz is double lowMin && spread.LowerCutoffMaxHz is double lowMax && lowMax > lowMin)
         {
-            shapes.Add(Span(lowMin, lowMax, "rgba(198, 40, 40, 0.12)", "3 dB edge spread"));
+            spreads.Add(new PlotSpan(lowMin, lowMax, "rgba(198, 40, 40, 0.12)", "3 dB edge spread"));
         }
 
         if (spread.UpperCutoffMinHz is double highMin && spread.UpperCutoffMaxHz is double highMax && highMax > highMin)
         {
-            shapes.Add(Span(highMin, highMax, "rgba(198, 40, 40, 0.12)", "3 dB edge spread"));
+            spreads.Add(new PlotSpan(highMin, highMax, "rgba(198, 40, 40, 0.12)", "3 dB edge spread"));
         }
 
-        AddEdge(shapes, plan.Band.Lower1DbHz, "dot", "1 dB");
-        AddEdge(shapes, plan.Band.Upper1DbHz, "dot", "1 dB");
-        AddEdge(shapes, plan.Band.LowerCutoffHz, "dash", "3 dB");
-        AddEdge(shapes, plan.Band.UpperCutoffHz, "dash", "3 dB");
-
-        var layout = new Layout
-        {
-            Height = 420,
-            Margin = new Margin { L = 60, R = 60, T = 20, B = 50 },
-            HoverMode = HoverModeEnum.XUnified,
-            XAxis =
-            [
-                new XAxis
-                {
-                    Type = Plotly.Blazor.LayoutLib.XAxisLib.TypeEnum.Log,
-                    Title = new Plotly.Blazor.LayoutLib.XAxisLib.Title { Text = "frequency" },
-                    TickFormat = "~s",
-                    TickSuffix = "Hz",
-                    ExponentFormat = Plotly.Blazor.LayoutLib.XAxisLib.ExponentFormatEnum.SI,
-                    HoverFormat = ".4s", // the unified read-out's heading, e.g. "7.348MHz"
-                    ShowGrid = true,
-                },
-            ],
-            YAxis =
-            [
-                new YAxis
-                {
-                    Title = new Plotly.Blazor.LayoutLib.YAxisLib.Title { Text = "insertion loss (dB)" },
-                    RangeMode = Plotly.Blazor.LayoutLib.YAxisLib.RangeModeEnum.ToZero,
-                },
-                new YAxis
-                {
-                    Title = new Plotly.Blazor.LayoutLib.YAxisLib.Title { Text = "return loss (dB)" },
-                    Overlaying = "y",
-                    Side = Plotly.Blazor.LayoutLib.YAxisLib.SideEnum.Right,
-                    RangeMode = Plotly.Blazor.LayoutLib.YAxisLib.RangeModeEnum.ToZero,
-                    ShowGrid = false,
-                },
-            ],
-            Shapes = shapes,
-            Legend = [new Legend { Orientation = Plotly.Blazor.LayoutLib.LegendLib.OrientationEnum.H, Y = -0.2m }],
-        };
-        var config = new Config { Responsive = true, DisplayLogo = false };
-        return new ResponsePlot(data, layout, config);
+        var edges = new List<PlotEdge>();
+        AddEdge(edges, plan.Band.Lower1DbHz, LineDash.Dot, "1 dB");
+        AddEdge(edges, plan.Band.Upper1DbHz, LineDash.Dot, "1 dB");
+        AddEdge(edges, plan.Band.LowerCutoffHz, LineDash.Dash, "3 dB");
+        AddEdge(edges, plan.Band.UpperCutoffHz, LineDash.Dash, "3 dB");
+        return new ResponsePlot(frequencies, series, band, spreads, edges);
     }
 
-    private static Shape Span(double fromHz, double toHz, string fill, string name) => new()
+    /// <summary>
+    /// The first response's frequencies when every response has the same ones (shared), otherwise all of them, ascending.
+    /// </summary>
+    private static (List<double> Frequencies, bool Shared) Frequencies(IReadOnlyList<(string Name, ResponseEvaluation Response)> responses)
     {
-        Type = Plotly.Blazor.LayoutLib.ShapeLib.TypeEnum.Rect,
-        Name = name,
-        XRef = "x",
-        YRef = "paper",
-        X0 = fromHz,
-        X1 = toHz,
-        Y0 = 0,
-        Y1 = 1,
-        FillColor = fill,
-        Line = new Plotly.Blazor.LayoutLib.ShapeLib.Line { Width = 0 },
-        Layer = Plotly.Blazor.LayoutLib.ShapeLib.LayerEnum.Below,
-    };
+        var first = responses[0].Response.Sweep.Select(p => p.FrequencyHz).ToList();
+        var shared = IsAscending(first) && responses.All(r => r.Response.Sweep.Select(p => p.FrequencyHz).SequenceEqual(first));
+        return shared
+            ? (first, true)
+            : (responses.SelectMany(r => r.Response.Sweep.Select(p => p.FrequencyHz)).Where(f => double.IsFinite(f) && f > 0).Distinct().Order().ToList(), false);
+    }
 
-    private static void AddEdge(List<Shape> shapes, double? edgeHz, string dash, string label)
+    private static bool IsAscending(List<double> values)
     {
-        if (edgeHz is not double hz)
+        if (values.Count > 0 && !(double.IsFinite(values[0]) && values[0] > 0))
         {
-            return;
+            return false;
         }
 
-        shapes.Add(new Shape
+        for (var i = 1; i < values.Count; i++)
         {
-            Type = Plotly.Blazor.LayoutLib.ShapeLib.TypeEnum.Line,
-            Name = label + " edge",
-            XRef = "x",
-            YRef = "paper",
-            X0 = hz,
-            X1 = hz,
-            Y0 = 0,
-            Y1 = 1,
-            Line = new Plotly.Blazor.LayoutLib.ShapeLib.Line { Color = "#424242", Width = 1, Dash = dash },
-            Label = new Plotly.Blazor.LayoutLib.ShapeLib.Label { Text = label, TextPosition = Plotly.Blazor.LayoutLib.ShapeLib.LabelLib.TextPositionEnum.End },
-        });
+            if (!(values[i] > values[i - 1]))
+            {
+                return false;
+            }
+        }
+
+        return double.IsFinite(values.Count > 0 ? values[^1] : 1);
+    }
+
+    /// <summary>The response's values at <paramref name="frequencies"/>: null where it has no point or the value is not finite.</summary>
+    private static double?[] Align(ResponseEvaluation response, List<double> frequencies, bool shared, Func<CircuitPoint, double> value)
+    {
+        var values = new double?[frequencies.Count];
+        var sweep = response.Sweep;
+        if (shared)
+        {
+            for (var i = 0; i < values.Length; i++)
+            {
+                values[i] = Finite(value(sweep[i]));
+            }
+
+            return values;
+        }
+
+        var index = new Dictionary<double, int>(frequencies.Count);
+        for (var i = 0; i < frequencies.Count; i++)
+        {
+            index[frequencies[i]] = i;
+        }
+
+        foreach (var point in sweep)
+        {
+            if (index.TryGetValue(point.FrequencyHz, out var at))
+            {
+                values[at] = Finite(value(point));
+            }
+        }
+
+        return values;
+    }
+
+    private static double? Finite(double value) => double.IsFinite(value) ? value : null;
+
+    private static void AddEdge(List<PlotEdge> edges, double? edgeHz, LineDash dash, string label)
+    {
+        if (edgeHz is double hz && double.IsFinite(hz) && hz > 0)
+        {
+            edges.Add(new PlotEdge(hz, dash, label, EdgeColour));
+        }
     }
 }

@@ -1,7 +1,5 @@
-using System.Globalization;
 using System.Numerics;
-using Plotly.Blazor.LayoutLib;
-using Plotly.Blazor.Traces;
+using System.Text.Json;
 using Winding.Core.Plans;
 using Winding.Core.Response;
 using Winding.Web.Display;
@@ -20,39 +18,50 @@ public sealed class ResponsePlotTests
         return new ResponseEvaluation(circuit, new Dictionary<string, double>(), 1e6, sweep, band, tolerance);
     }
 
-    private static double Number(object value) => Convert.ToDouble(value, CultureInfo.InvariantCulture);
-
-    private static IEnumerable<Shape> Lines(ResponsePlot plot) => plot.Layout.Shapes.Where(s => s.Type == Plotly.Blazor.LayoutLib.ShapeLib.TypeEnum.Line);
-
-    private static IEnumerable<Shape> Rects(ResponsePlot plot) => plot.Layout.Shapes.Where(s => s.Type == Plotly.Blazor.LayoutLib.ShapeLib.TypeEnum.Rect);
-
     [Fact]
-    public void For_OneResponse_TracesCarryTheSweepsValues()
+    public void For_OneResponse_SeriesCarryTheSweepsValues()
     {
         var response = Response();
 
         var plot = ResponsePlot.For([("plan", response)], 1e5, 1e8);
 
-        Assert.Equal(2, plot.Data.Count);
-        var insertion = Assert.IsType<Scatter>(plot.Data[0]);
-        var returnLoss = Assert.IsType<Scatter>(plot.Data[1]);
-        Assert.Equal(response.Sweep.Select(p => p.FrequencyHz), insertion.X.Select(Number));
-        Assert.Equal(response.Sweep.Select(p => p.InsertionLossDb), insertion.Y.Select(Number));
-        Assert.Equal(response.Sweep.Select(p => p.FrequencyHz), returnLoss.X.Select(Number));
-        Assert.Equal(response.Sweep.Select(p => p.ReturnLossDb), returnLoss.Y.Select(Number));
-        Assert.Equal("y2", returnLoss.YAxis);
+        Assert.Equal(response.Sweep.Select(p => p.FrequencyHz), plot.FrequenciesHz);
+        Assert.Equal(2, plot.Series.Count);
+        var insertion = plot.Series[0];
+        var returnLoss = plot.Series[1];
+        Assert.Equal(response.Sweep.Select(p => (double?)p.InsertionLossDb), insertion.Values);
+        Assert.Equal(response.Sweep.Select(p => (double?)p.ReturnLossDb), returnLoss.Values);
+        Assert.Equal((PlotAxis.Left, LineDash.Solid), (insertion.Axis, insertion.Dash));
+        Assert.Equal((PlotAxis.Right, LineDash.Dash), (returnLoss.Axis, returnLoss.Dash));
+        Assert.Equal("dB", insertion.Unit);
+        Assert.False(insertion.SpansGaps);
         Assert.StartsWith("plan", insertion.Name, StringComparison.Ordinal);
-        Assert.Contains("dB", insertion.HoverTemplate, StringComparison.Ordinal);
+        Assert.Equal(insertion.Colour, returnLoss.Colour);
     }
 
     [Fact]
-    public void For_FrequencyAxis_IsLogarithmic_WithAReadOutAcrossTraces()
+    public void ToJson_CarriesTheSeriesAndMarks_WithNullForValuesNotFinite()
     {
-        var plot = ResponsePlot.For([("plan", Response())], 1e5, 1e8);
+        var response = Response();
+        var sweep = response.Sweep.ToArray();
+        sweep[3] = sweep[3] with { InsertionLossDb = double.PositiveInfinity, ReturnLossDb = double.NaN };
 
-        Assert.Equal(Plotly.Blazor.LayoutLib.XAxisLib.TypeEnum.Log, plot.Layout.XAxis[0].Type);
-        Assert.Equal(HoverModeEnum.XUnified, plot.Layout.HoverMode);
-        Assert.Equal(2, plot.Layout.YAxis.Count);
+        var plot = ResponsePlot.For([("plan", response with { Sweep = sweep })], 1e5, 1e8);
+        using var json = JsonDocument.Parse(plot.ToJson());
+        var root = json.RootElement;
+
+        Assert.Equal(sweep.Length, root.GetProperty("frequenciesHz").GetArrayLength());
+        var series = root.GetProperty("series");
+        Assert.Equal(2, series.GetArrayLength());
+        Assert.Equal(JsonValueKind.Null, series[0].GetProperty("values")[3].ValueKind);
+        Assert.Equal(JsonValueKind.Null, series[1].GetProperty("values")[3].ValueKind);
+        Assert.Equal(sweep[4].InsertionLossDb, series[0].GetProperty("values")[4].GetDouble());
+        Assert.Equal("right", series[1].GetProperty("axis").GetString());
+        Assert.Equal("dash", series[1].GetProperty("dash").GetString());
+        Assert.Equal(1e5, root.GetProperty("band").GetProperty("fromHz").GetDouble());
+        Assert.Equal(4, root.GetProperty("edges").GetArrayLength());
+        Assert.Equal("frequency", root.GetProperty("frequencyTitle").GetString());
+        Assert.Equal("insertion loss (dB)", root.GetProperty("leftTitle").GetString());
     }
 
     [Fact]
@@ -67,15 +76,35 @@ public sealed class ResponsePlotTests
 
         var plot = ResponsePlot.For([("plan", response), ("more turns", Response(400e-6))], 1e5, 1e8);
 
-        var edges = Lines(plot).Select(s => Number(s.X0)).Order().ToList();
+        var edges = plot.Edges.Select(e => e.FrequencyHz).Order().ToList();
         Assert.Equal(new[] { band.LowerCutoffHz!.Value, band.Lower1DbHz!.Value, band.Upper1DbHz!.Value, band.UpperCutoffHz!.Value }, edges);
-        Assert.All(Lines(plot), s => Assert.Equal(Number(s.X0), Number(s.X1)));
-        var spans = Rects(plot).Select(s => (Number(s.X0), Number(s.X1))).ToList();
-        Assert.Contains((1e5, 1e8), spans);
+        Assert.Equal(2, plot.Edges.Count(e => e.Dash == LineDash.Dot && e.Label == "1 dB"));
+        Assert.Equal(2, plot.Edges.Count(e => e.Dash == LineDash.Dash && e.Label == "3 dB"));
+        Assert.Equal((1e5, 1e8), (plot.Band.FromHz, plot.Band.ToHz));
+        var spans = plot.Spreads.Select(s => (s.FromHz, s.ToHz)).ToList();
         Assert.Contains((response.Tolerance.LowerCutoffMinHz!.Value, response.Tolerance.LowerCutoffMaxHz!.Value), spans);
         Assert.Contains((response.Tolerance.UpperCutoffMinHz!.Value, response.Tolerance.UpperCutoffMaxHz!.Value), spans);
-        Assert.Equal(4, plot.Data.Count);
-        Assert.StartsWith("more turns", Assert.IsType<Scatter>(plot.Data[2]).Name, StringComparison.Ordinal);
+        Assert.Equal(4, plot.Series.Count);
+        Assert.StartsWith("more turns", plot.Series[2].Name, StringComparison.Ordinal);
+        Assert.NotEqual(plot.Series[0].Colour, plot.Series[2].Colour);
+    }
+
+    [Fact]
+    public void For_VariantWithOtherFrequencies_IsAlignedOnAllFrequencies_AndSpansItsGaps()
+    {
+        var plan = Response();
+        var variant = Response(400e-6);
+        var fewer = variant with { Sweep = variant.Sweep.Where((_, i) => i % 2 == 0).ToArray() };
+
+        var plot = ResponsePlot.For([("plan", plan), ("variant", fewer with { Sweep = [.. fewer.Sweep, plan.Sweep[^1] with { FrequencyHz = 2e10 }] })], 1e5, 1e8);
+
+        Assert.Equal(plan.Sweep.Count + 1, plot.FrequenciesHz.Count);
+        Assert.Equal(plot.FrequenciesHz.Order(), plot.FrequenciesHz);
+        Assert.Equal(plan.Sweep.Select(p => (double?)p.InsertionLossDb), plot.Series[0].Values.Take(plan.Sweep.Count));
+        Assert.Null(plot.Series[0].Values[^1]);
+        Assert.Null(plot.Series[2].Values[1]);
+        Assert.Equal(variant.Sweep[2].InsertionLossDb, plot.Series[2].Values[2]);
+        Assert.All(plot.Series, s => Assert.True(s.SpansGaps));
     }
 
     [Fact]
@@ -89,8 +118,8 @@ public sealed class ResponsePlotTests
 
         var plot = ResponsePlot.For([("plan", response)], 1e5, 1e8);
 
-        Assert.Empty(Lines(plot));
-        Assert.Single(Rects(plot));
+        Assert.Empty(plot.Edges);
+        Assert.Empty(plot.Spreads);
     }
 
     [Theory]
